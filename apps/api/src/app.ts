@@ -1,0 +1,91 @@
+import path from "node:path";
+import { existsSync } from "node:fs";
+import express from "express";
+import helmet from "helmet";
+import { toNodeHandler } from "better-auth/node";
+import type { Db } from "@takeup/db";
+import type { AppConfig } from "./config.ts";
+import { createAuth } from "./auth.ts";
+import type { Deps } from "./deps.ts";
+import type { Mailer } from "./lib/mailer.ts";
+import { logger } from "./lib/logger.ts";
+import { buildOpenApi } from "./lib/openapi.ts";
+import { createSessionReader } from "./lib/session.ts";
+import { SignInThrottle } from "./lib/sign-in-throttle.ts";
+import { HttpError } from "./lib/http-error.ts";
+import { errorHandler, notFoundJson } from "./middleware/error-handler.ts";
+import { sameOrigin } from "./middleware/same-origin.ts";
+import { auditRouter } from "./routes/audit/audit.router.ts";
+import { clientsRouter } from "./routes/clients/clients.router.ts";
+import { devMailRouter } from "./routes/dev-mail/dev-mail.router.ts";
+import { healthRouter } from "./routes/health/health.router.ts";
+import { invitationsRouter } from "./routes/invitations/invitations.router.ts";
+import { meRouter, sessionRouter } from "./routes/session/session.router.ts";
+import { staffRouter } from "./routes/staff/staff.router.ts";
+import { studioRouter } from "./routes/studio/studio.router.ts";
+
+export type AppDeps = { db: Db; config: AppConfig; mailer: Mailer; throttle?: SignInThrottle };
+
+/** Every API router, in mount order; the OpenAPI document and the access tests read this list. */
+export function apiRouters(deps: Deps) {
+  return [
+    healthRouter(deps),
+    sessionRouter(deps),
+    meRouter(),
+    invitationsRouter(deps),
+    studioRouter(deps),
+    staffRouter(deps),
+    clientsRouter(deps),
+    auditRouter(deps),
+    devMailRouter(deps),
+  ];
+}
+
+// better-auth endpoints our own routes stand in front of (throttled sign-in; no self sign-up).
+const closedAuthPaths = ["/api/auth/sign-in/email", "/api/auth/sign-up/email"];
+
+/** Builds the app without listening: server.ts listens, tests drive it with supertest. */
+export function createApp({ db, config, mailer, throttle = new SignInThrottle() }: AppDeps) {
+  const auth = createAuth(db, config, mailer);
+  const deps: Deps = { db, config, mailer, auth, throttle };
+  const sessions = createSessionReader(auth, db);
+  const routers = apiRouters(deps);
+  const openApi = buildOpenApi(routers.flatMap((r) => r.routes));
+
+  const app = express();
+  app.disable("x-powered-by");
+  app.set("trust proxy", config.trustProxy);
+  app.use(
+    helmet({
+      contentSecurityPolicy: {
+        directives: { "img-src": ["'self'", "data:"], "connect-src": ["'self'"], "upgrade-insecure-requests": null },
+      },
+      strictTransportSecurity: config.appUrl.startsWith("https://"),
+    }),
+  );
+  app.use("/api", sameOrigin([config.appUrl]));
+  app.all(closedAuthPaths, () => {
+    throw new HttpError(404, "not_found", "Sign in through /api/session");
+  });
+  // better-auth reads its own request bodies, so it is mounted before express.json().
+  app.all("/api/auth/*splat", toNodeHandler(auth));
+  app.use("/api", express.json({ limit: "200kb" }));
+  app.get("/api/openapi.json", (_req, res) => {
+    res.json(openApi);
+  });
+  for (const router of routers) app.use(router.base, router.toExpress(sessions));
+  app.use("/api", notFoundJson);
+
+  if (config.webDist && existsSync(path.join(config.webDist, "index.html"))) {
+    const indexHtml = path.join(config.webDist, "index.html");
+    app.use("/assets", express.static(path.join(config.webDist, "assets"), { immutable: true, maxAge: "1y" }));
+    app.use(express.static(config.webDist, { index: false }));
+    app.get("/*splat", (_req, res) => {
+      res.setHeader("cache-control", "no-cache");
+      res.sendFile(indexHtml);
+    });
+  }
+
+  app.use(errorHandler(logger));
+  return Object.assign(app, { routes: routers.flatMap((r) => r.routes), auth });
+}

@@ -1,0 +1,61 @@
+import { APIError, betterAuth } from "better-auth";
+import { drizzleAdapter } from "better-auth/adapters/drizzle";
+import { account, session, user, verification, type Db } from "@takeup/db";
+import type { AppConfig } from "./config.ts";
+import { loadActor } from "./lib/actor.ts";
+import type { Mailer } from "./lib/mailer.ts";
+import { passwordResetEmail } from "./emails/password-reset.ts";
+import { loadStudio } from "./routes/studio/studio.service.ts";
+
+export function createAuth(db: Db, config: AppConfig, mailer: Mailer) {
+  return betterAuth({
+    appName: "Takeup",
+    baseURL: config.appUrl,
+    basePath: "/api/auth",
+    secret: config.authSecret,
+    database: drizzleAdapter(db, { provider: "mysql", schema: { user, session, account, verification } }),
+    telemetry: { enabled: false },
+    trustedOrigins: [config.appUrl],
+    emailAndPassword: {
+      enabled: true,
+      // Nobody signs themselves up: the owner and the manager invite people.
+      disableSignUp: true,
+      minPasswordLength: 10,
+      maxPasswordLength: 128,
+      revokeSessionsOnPasswordReset: true,
+      resetPasswordTokenExpiresIn: 60 * 60,
+      sendResetPassword: async ({ user: recipient, url }) => {
+        const studio = await loadStudio(db);
+        await mailer.send(passwordResetEmail({ studioName: studio.name, to: recipient.email, name: recipient.name, url }));
+      },
+    },
+    session: {
+      expiresIn: 60 * 60 * 24 * 7,
+      updateAge: 60 * 60 * 24,
+      // Read the session from the database on every request, so deactivation ends it at once.
+      cookieCache: { enabled: false },
+    },
+    // Our own sign-in route throttles failures per address and per account (sign-in-throttle.ts).
+    rateLimit: { enabled: false },
+    advanced: {
+      // better-auth skips its Origin check under NODE_ENV=test; tests must see what production does.
+      disableOriginCheck: false,
+      useSecureCookies: config.appUrl.startsWith("https://"),
+      defaultCookieAttributes: { httpOnly: true, sameSite: "lax" },
+    },
+    databaseHooks: {
+      session: {
+        create: {
+          before: async (newSession) => {
+            const actor = await loadActor(db, newSession.userId);
+            if (!actor?.active) {
+              throw new APIError("FORBIDDEN", { message: "This sign-in has been deactivated; ask the studio owner" });
+            }
+          },
+        },
+      },
+    },
+  });
+}
+
+export type Auth = ReturnType<typeof createAuth>;

@@ -1,0 +1,80 @@
+import { Router, type Request, type Response } from "express";
+import type { z } from "zod";
+import { requireRole, type Access } from "../middleware/require-role.ts";
+import type { Actor } from "./actor.ts";
+import type { SessionReader } from "./session.ts";
+
+type Method = "get" | "post" | "patch" | "put" | "delete";
+type Schema = z.ZodType;
+type Parsed<S> = S extends z.ZodType ? z.output<S> : undefined;
+
+export type RouteContext<P, Q, B, A extends Access> = {
+  req: Request;
+  res: Response;
+  actor: A extends "public" ? null : Actor;
+  params: Parsed<P>;
+  query: Parsed<Q>;
+  body: Parsed<B>;
+};
+
+export type RouteSpec<P = undefined, Q = undefined, B = undefined, A extends Access = Access> = {
+  method: Method;
+  /** Relative to the router's base, in Express syntax (`/:id`). */
+  path: string;
+  summary: string;
+  access: A;
+  params?: P;
+  query?: Q;
+  body?: B;
+  /** Documents the success body; `file` means the handler streams a download itself. */
+  response?: Schema | "file";
+  status?: number;
+  handler: (ctx: RouteContext<P, Q, B, A>) => Promise<unknown>;
+};
+
+export type RegisteredRoute = RouteSpec<Schema | undefined, Schema | undefined, Schema | undefined, Access> & {
+  fullPath: string;
+  tag: string;
+};
+
+/**
+ * The one way to declare an API route: it mounts the handler behind requireRole and the zod
+ * contracts, and records the route so the OpenAPI document and the access tests see it.
+ */
+export class ApiRouter {
+  readonly routes: RegisteredRoute[] = [];
+
+  constructor(
+    readonly base: string,
+    readonly tag: string,
+  ) {}
+
+  route<P extends Schema | undefined = undefined, Q extends Schema | undefined = undefined, B extends Schema | undefined = undefined, A extends Access = Access>(
+    spec: RouteSpec<P, Q, B, A>,
+  ): this {
+    this.routes.push({ ...(spec as unknown as RouteSpec<Schema, Schema, Schema, Access>), fullPath: this.base + spec.path, tag: this.tag });
+    return this;
+  }
+
+  toExpress(sessions: SessionReader): Router {
+    const router = Router();
+    for (const spec of this.routes) {
+      router[spec.method](spec.path, requireRole(sessions, spec.access), async (req, res) => {
+        const ctx = {
+          req,
+          res,
+          actor: (res.locals.actor as Actor | undefined) ?? null,
+          params: spec.params ? spec.params.parse(req.params) : undefined,
+          query: spec.query ? spec.query.parse(req.query) : undefined,
+          body: spec.body ? spec.body.parse(req.body) : undefined,
+        };
+        const result = await spec.handler(ctx as never);
+        if (spec.response === "file" || res.headersSent) return;
+        if (result === undefined) res.status(spec.status ?? 204).end();
+        // A handler may pick its own status (health answers 503 with a body).
+        else res.status(res.statusCode !== 200 ? res.statusCode : (spec.status ?? 200)).json(result);
+      });
+    }
+    return router;
+  }
+}

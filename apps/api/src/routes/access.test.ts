@@ -1,0 +1,85 @@
+// Walks every route of the OpenAPI document with every role and checks the matrix in docs/roles.md.
+import { readFileSync } from "node:fs";
+import path from "node:path";
+import { fileURLToPath } from "node:url";
+import { afterAll, beforeAll, describe, expect, it } from "vitest";
+import { eq } from "drizzle-orm";
+import { clientAccounts, staffProfiles } from "@takeup/db";
+import { createTestApp, type TestApp } from "../test/harness.ts";
+import { demo } from "../test/demo.ts";
+
+const columns = ["signed out", "owner", "manager", "engineer", "bookkeeper", "client"] as const;
+type Column = (typeof columns)[number];
+
+function readMatrix(): Map<string, Record<Column, string>> {
+  const file = path.resolve(path.dirname(fileURLToPath(import.meta.url)), "../../../../docs/roles.md");
+  const rows = new Map<string, Record<Column, string>>();
+  for (const line of readFileSync(file, "utf8").split("\n")) {
+    const match = line.match(/^\| `([A-Z]+ \/api\/[^`]*)` \|(.*)\|$/);
+    if (!match) continue;
+    const cells = match[2]!.split("|").map((c) => c.trim());
+    rows.set(match[1]!, Object.fromEntries(columns.map((c, i) => [c, cells[i]!])) as Record<Column, string>);
+  }
+  return rows;
+}
+
+let t: TestApp;
+let operations: string[];
+const agents = new Map<Column, ReturnType<TestApp["client"]>>();
+let ownClientId: number;
+let otherClientId: number;
+let someStaffUserId: string;
+
+beforeAll(async () => {
+  t = await createTestApp();
+  const doc = (await t.client().get("/api/openapi.json")).body as { paths: Record<string, Record<string, unknown>> };
+  operations = Object.entries(doc.paths).flatMap(([p, methods]) => Object.keys(methods).map((m) => `${m.toUpperCase()} ${p}`));
+  agents.set("signed out", t.client());
+  for (const role of ["owner", "manager", "engineer", "bookkeeper", "client"] as const) agents.set(role, await t.signIn(demo[role]));
+  const [own] = await t.db.select().from(clientAccounts).where(eq(clientAccounts.name, "Lantern Static"));
+  const [other] = await t.db.select().from(clientAccounts).where(eq(clientAccounts.name, "The Quiet Orchard"));
+  ownClientId = own!.id;
+  otherClientId = other!.id;
+  const [staff] = await t.db.select().from(staffProfiles).where(eq(staffProfiles.role, "engineer")).limit(1);
+  someStaffUserId = staff!.userId;
+});
+afterAll(() => t.close());
+
+function concretePath(template: string, clientId: number) {
+  return template
+    .replace("{id}", String(clientId))
+    .replace("{userId}", someStaffUserId)
+    .replace("{token}", "x".repeat(43));
+}
+
+describe("the access matrix in docs/roles.md", () => {
+  it("lists exactly the routes of the OpenAPI document", () => {
+    expect([...readMatrix().keys()].sort()).toEqual([...operations].sort());
+  });
+
+  it("is what the API does, for every route and every role", async () => {
+    const matrix = readMatrix();
+    const mismatches: string[] = [];
+    // Signing out ends the agent's session, so that route goes last.
+    const ordered = [...operations].sort((a, b) => Number(a === "DELETE /api/session") - Number(b === "DELETE /api/session"));
+    for (const operation of ordered) {
+      const [method, template] = operation.split(" ") as [string, string];
+      for (const column of columns) {
+        const expected = matrix.get(operation)?.[column];
+        const agent = agents.get(column)!;
+        const call = (p: string) => agent[method.toLowerCase() as "get"](p);
+        const status = (await call(concretePath(template, ownClientId))).status;
+        const refused = column === "signed out" ? status === 401 : status === 403;
+        if (expected === "no" && !refused) mismatches.push(`${operation} as ${column}: expected refusal, got ${status}`);
+        if ((expected === "yes" || expected === "own") && (status === 401 || status === 403)) {
+          mismatches.push(`${operation} as ${column}: expected access, got ${status}`);
+        }
+        if (expected === "own" && template.includes("{id}")) {
+          const other = (await call(concretePath(template, otherClientId))).status;
+          if (other !== 404) mismatches.push(`${operation} as ${column} on another account: expected 404, got ${other}`);
+        }
+      }
+    }
+    expect(mismatches).toEqual([]);
+  });
+});

@@ -1,0 +1,111 @@
+import type { Response } from "express";
+import { fromNodeHeaders } from "better-auth/node";
+import { meDto, okDto, passwordResetInput, passwordResetRequestInput, signInInput } from "@takeup/domain";
+import { ApiRouter } from "../../lib/api-router.ts";
+import { fromAuthError } from "../../lib/better-auth-errors.ts";
+import type { Actor } from "../../lib/actor.ts";
+import type { Deps } from "../../deps.ts";
+import { HttpError } from "../../lib/http-error.ts";
+import { loadActor } from "../../lib/actor.ts";
+
+export const toMe = (actor: Actor) => ({
+  id: actor.userId,
+  name: actor.name,
+  email: actor.email,
+  role: actor.role,
+  clientAccount:
+    actor.clientAccountId !== null ? { id: actor.clientAccountId, name: actor.clientAccountName ?? "" } : null,
+});
+
+function forwardCookies(res: Response, headers: Headers) {
+  for (const cookie of headers.getSetCookie()) res.append("set-cookie", cookie);
+}
+
+/** Sign-in, sign-out and password reset, in our error shape, in front of better-auth. */
+export function sessionRouter({ db, auth, config, throttle }: Deps) {
+  return new ApiRouter("/api/session", "Session")
+    .route({
+      method: "post",
+      path: "/",
+      summary: "Sign in with e-mail and password (429 after repeated failures)",
+      access: "public",
+      body: signInInput,
+      response: meDto,
+      handler: async ({ req, res, body }) => {
+        const address = req.ip ?? "unknown";
+        throttle.assertAllowed(address, body.email);
+        let result;
+        try {
+          result = await auth.api.signInEmail({
+            body: { email: body.email, password: body.password, rememberMe: true },
+            headers: fromNodeHeaders(req.headers),
+            returnHeaders: true,
+          });
+        } catch (error) {
+          throttle.recordFailure(address, body.email);
+          fromAuthError(error, { code: "invalid_credentials", message: "That e-mail and password do not match" });
+        }
+        throttle.recordSuccess(body.email);
+        const actor = await loadActor(db, result.response.user.id);
+        if (!actor) throw new HttpError(403, "no_role", "This sign-in has no role at the studio");
+        forwardCookies(res, result.headers);
+        return toMe(actor);
+      },
+    })
+    .route({
+      method: "delete",
+      path: "/",
+      summary: "Sign out",
+      access: "public",
+      response: okDto,
+      handler: async ({ req, res }) => {
+        try {
+          const result = await auth.api.signOut({ headers: fromNodeHeaders(req.headers), returnHeaders: true });
+          forwardCookies(res, result.headers);
+        } catch {
+          // Already signed out: nothing to end.
+        }
+        return { ok: true };
+      },
+    })
+    .route({
+      method: "post",
+      path: "/password-reset-requests",
+      summary: "E-mail a password-reset link (answers the same whether or not the address is known)",
+      access: "public",
+      body: passwordResetRequestInput,
+      status: 202,
+      response: okDto,
+      handler: async ({ body }) => {
+        await auth.api.requestPasswordReset({ body: { email: body.email, redirectTo: `${config.appUrl}/reset-password` } });
+        return { ok: true };
+      },
+    })
+    .route({
+      method: "post",
+      path: "/password-resets",
+      summary: "Set a new password with the token from a reset e-mail",
+      access: "public",
+      body: passwordResetInput,
+      response: okDto,
+      handler: async ({ body }) => {
+        try {
+          await auth.api.resetPassword({ body: { token: body.token, newPassword: body.password } });
+        } catch (error) {
+          fromAuthError(error, { code: "invalid_reset_token", message: "This reset link has expired or was already used; ask for a new one" });
+        }
+        return { ok: true };
+      },
+    });
+}
+
+export function meRouter() {
+  return new ApiRouter("/api/me", "Session").route({
+    method: "get",
+    path: "/",
+    summary: "The signed-in user and their role",
+    access: "signed-in",
+    response: meDto,
+    handler: async ({ actor }) => toMe(actor),
+  });
+}

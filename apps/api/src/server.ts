@@ -1,0 +1,27 @@
+import { createDb } from "@takeup/db";
+import { createApp } from "./app.ts";
+import { readConfig } from "./config.ts";
+import { createMailer } from "./lib/mailer.ts";
+import { logger } from "./lib/logger.ts";
+import { loadStudio } from "./routes/studio/studio.service.ts";
+
+const { config, databaseUrl, port } = readConfig();
+const { db, pool } = createDb(databaseUrl);
+const mailer = createMailer(db, config.smtpUrl, config.mailFrom, async () => (await loadStudio(db)).name);
+const app = createApp({ db, config, mailer });
+
+const server = app.listen(port, () => logger.info("takeup api listening", { port, appUrl: config.appUrl }));
+
+let closing = false;
+async function shutdown(signal: string) {
+  if (closing) return;
+  closing = true;
+  logger.info("shutting down", { signal });
+  server.close();
+  server.closeAllConnections();
+  mailer.close();
+  await pool.end();
+  process.exit(0);
+}
+process.on("SIGTERM", () => void shutdown("SIGTERM"));
+process.on("SIGINT", () => void shutdown("SIGINT"));

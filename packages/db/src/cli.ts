@@ -1,0 +1,44 @@
+// Database tasks for the scripts: migrate, seed [--if-empty], reset.
+import { createDb } from "./client.ts";
+import { migrateDatabase } from "./migrate.ts";
+import { isSeeded, seedDemo } from "./seed/demo.ts";
+
+const url = process.env.DATABASE_URL;
+if (!url) throw new Error("DATABASE_URL is not set");
+const [task, flag] = process.argv.slice(2);
+
+async function seed(ifEmpty: boolean) {
+  const { db, pool } = createDb(url!, { connectionLimit: 2 });
+  try {
+    if (await isSeeded(db)) {
+      if (ifEmpty) return console.log("[db] demo data already present: nothing seeded");
+      throw new Error("the database already holds a studio; use db:reset to start over");
+    }
+    await seedDemo(db);
+    console.log("[db] seeded the demo studio (Wrenfield Sound)");
+  } finally {
+    await pool.end();
+  }
+}
+
+async function reset() {
+  const { pool } = createDb(url!, { connectionLimit: 1 });
+  const [rows] = await pool.query("SELECT DATABASE() AS name");
+  const name = (rows as { name: string }[])[0]!.name;
+  await pool.query(`DROP DATABASE \`${name}\``);
+  await pool.query(`CREATE DATABASE \`${name}\` CHARACTER SET utf8mb4 COLLATE utf8mb4_unicode_ci`);
+  await pool.end();
+}
+
+if (task === "migrate") {
+  await migrateDatabase(url);
+  console.log("[db] migrations applied");
+} else if (task === "seed") {
+  await seed(flag === "--if-empty");
+} else if (task === "reset") {
+  await reset();
+  await migrateDatabase(url);
+  await seed(false);
+} else {
+  throw new Error(`unknown task ${task}; use migrate, seed or reset`);
+}

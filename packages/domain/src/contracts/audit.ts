@@ -1,0 +1,18 @@
+import { z } from "zod";
+
+export const auditEventDto = z.object({
+  id: z.number(),
+  at: z.string(),
+  actorName: z.string().nullable(),
+  action: z.string(),
+  entityType: z.string(),
+  entityId: z.string(),
+  before: z.unknown(),
+  after: z.unknown(),
+});
+export type AuditEventDto = z.infer<typeof auditEventDto>;
+
+export const auditQuery = z.strictObject({
+  entityType: z.string().max(48).optional(),
+  limit: z.coerce.number().int().min(1).max(500).default(100),
+});

@@ -1,0 +1,75 @@
+import { z } from "zod";
+import { emailAddress, optionalEmail, optionalText, personName } from "./common.ts";
+import { pendingInvitationDto } from "./staff.ts";
+
+export const clientKinds = ["band", "producer", "label"] as const;
+export type ClientKind = (typeof clientKinds)[number];
+export const clientKindLabels: Record<ClientKind, string> = { band: "Band", producer: "Producer", label: "Label" };
+
+export const contactInput = z.strictObject({
+  name: personName,
+  email: optionalEmail,
+  phone: optionalText(40),
+  note: optionalText(120),
+  isPrimary: z.boolean().optional(),
+});
+export type ContactInput = z.infer<typeof contactInput>;
+
+const clientFields = {
+  name: z.string().trim().min(1, "Enter the client's name").max(120, "Use at most 120 characters"),
+  kind: z.enum(clientKinds, "Choose band, producer or label"),
+  email: optionalEmail,
+  phone: optionalText(40),
+  billingAddress: optionalText(500),
+  notes: optionalText(2000),
+  contacts: z.array(contactInput).max(20, "Keep to 20 contacts").optional(),
+};
+
+export const createClientInput = z.strictObject(clientFields);
+export type CreateClientInput = z.infer<typeof createClientInput>;
+
+export const updateClientInput = createClientInput.partial().extend({ active: z.boolean().optional() });
+export type UpdateClientInput = z.infer<typeof updateClientInput>;
+
+export const contactDto = z.object({
+  id: z.number(),
+  name: z.string(),
+  email: z.string().nullable(),
+  phone: z.string().nullable(),
+  note: z.string().nullable(),
+  isPrimary: z.boolean(),
+});
+export type ContactDto = z.infer<typeof contactDto>;
+
+export const clientSummaryDto = z.object({
+  id: z.number(),
+  name: z.string(),
+  kind: z.enum(clientKinds),
+  email: z.string().nullable(),
+  phone: z.string().nullable(),
+  active: z.boolean(),
+  primaryContact: z.string().nullable(),
+  userCount: z.number(),
+});
+export type ClientSummaryDto = z.infer<typeof clientSummaryDto>;
+
+export const clientUserDto = z.object({
+  userId: z.string(),
+  name: z.string(),
+  email: z.string(),
+  active: z.boolean(),
+});
+
+export const clientDetailDto = clientSummaryDto.extend({
+  billingAddress: z.string().nullable(),
+  notes: z.string().nullable(),
+  contacts: z.array(contactDto),
+  users: z.array(clientUserDto),
+  invitations: z.array(pendingInvitationDto),
+});
+export type ClientDetailDto = z.infer<typeof clientDetailDto>;
+
+export const inviteClientUserInput = z.strictObject({ name: personName, email: emailAddress });
+export type InviteClientUserInput = z.infer<typeof inviteClientUserInput>;
+
+export const updateClientUserInput = z.strictObject({ active: z.boolean() });

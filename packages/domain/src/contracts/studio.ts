@@ -1,0 +1,30 @@
+import { z } from "zod";
+import { isValidTimeZone } from "../shared/time-zone.ts";
+import { supportedCurrencies } from "../shared/currency.ts";
+import { optionalEmail, optionalText } from "./common.ts";
+
+export const studioDto = z.object({
+  name: z.string(),
+  timeZone: z.string(),
+  currency: z.string(),
+  workweekStartDay: z.number().int().min(1).max(7),
+  address: z.string().nullable(),
+  email: z.string().nullable(),
+  phone: z.string().nullable(),
+});
+export type StudioDto = z.infer<typeof studioDto>;
+
+export const updateStudioInput = z.strictObject({
+  name: z.string().trim().min(1, "Enter the studio's name").max(120).optional(),
+  timeZone: z
+    .string()
+    .max(64)
+    .refine(isValidTimeZone, "Use an IANA time zone such as America/Chicago")
+    .optional(),
+  currency: z.enum(supportedCurrencies as [string, ...string[]]).optional(),
+  workweekStartDay: z.number().int().min(1).max(7).optional(),
+  address: optionalText(500),
+  email: optionalEmail,
+  phone: optionalText(40),
+});
+export type UpdateStudioInput = z.infer<typeof updateStudioInput>;

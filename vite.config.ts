@@ -1,0 +1,65 @@
+import { defineConfig } from "vitest/config";
+import react from "@vitejs/plugin-react";
+import tailwindcss from "@tailwindcss/vite";
+
+const apiPort = Number(process.env.API_PORT ?? 3000);
+
+// One config: the web app's build and dev server, and every Vitest project.
+export default defineConfig({
+  root: "apps/web",
+  plugins: [react(), tailwindcss()],
+  build: { outDir: "dist", emptyOutDir: true, sourcemap: true, chunkSizeWarningLimit: 900 },
+  server: {
+    port: 5173,
+    proxy: { "/api": { target: `http://127.0.0.1:${apiPort}`, changeOrigin: false } },
+  },
+  test: {
+    root: ".",
+    projects: [
+      {
+        test: {
+          name: "domain",
+          root: "packages/domain",
+          environment: "node",
+          include: ["src/**/*.test.ts"],
+          setupFiles: ["../../tests/support/fail-on-console-error.ts"],
+        },
+      },
+      {
+        test: {
+          name: "api",
+          root: ".",
+          environment: "node",
+          include: ["apps/api/src/**/*.test.ts", "apps/mail-catcher/src/**/*.test.ts", "packages/db/src/**/*.test.ts", "tests/reference/**/*.test.ts"],
+          setupFiles: ["tests/support/fail-on-console-error.ts"],
+          env: { NODE_ENV: "test" },
+          testTimeout: 30000,
+          hookTimeout: 60000,
+        },
+      },
+      {
+        extends: true,
+        test: {
+          name: "web",
+          root: "apps/web",
+          environment: "jsdom",
+          include: ["src/**/*.test.{ts,tsx}"],
+          setupFiles: ["./src/test/setup.ts", "../../tests/support/fail-on-console-error.ts"],
+          css: false,
+        },
+      },
+      {
+        test: {
+          name: "e2e",
+          root: "tests/e2e",
+          environment: "node",
+          include: ["**/*.spec.ts"],
+          setupFiles: ["../support/fail-on-console-error.ts"],
+          testTimeout: 60000,
+          hookTimeout: 60000,
+          fileParallelism: false,
+        },
+      },
+    ],
+  },
+});
