@@ -40,8 +40,8 @@ export async function startMailCatcher({ smtpPort, httpPort }) {
   await waitFor("the mail catcher", () => httpOk(`http://127.0.0.1:${httpPort}/health`));
 }
 
-export async function startApi({ port, env, quiet = false }) {
-  const child = startChild("api", tsx, ["apps/api/src/server.ts"], {
+export async function startApi({ port, env, quiet = false, watch = false }) {
+  const child = startChild("api", tsx, [...(watch ? ["watch"] : []), "apps/api/src/server.ts"], {
     env: { ...process.env, NODE_ENV: "production", PORT: String(port), ...env },
     quiet,
   });

@@ -1,5 +1,6 @@
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { createTestApp, type TestApp } from "../test/harness.ts";
+import type { RegisteredRoute } from "../lib/api-router.ts";
 
 let t: TestApp;
 beforeAll(async () => {
@@ -14,7 +15,7 @@ describe("GET /api/openapi.json", () => {
     const documented = Object.entries(doc.paths as Record<string, Record<string, unknown>>).flatMap(([p, ops]) =>
       Object.keys(ops).map((m) => `${m.toUpperCase()} ${p}`),
     );
-    const mounted = t.app.routes.map((r) => `${r.method.toUpperCase()} ${(r.fullPath.replace(/\/$/, "") || "/").replace(/:(\w+)/g, "{$1}")}`);
+    const mounted = t.app.routes.map((r: RegisteredRoute) => `${r.method.toUpperCase()} ${(r.fullPath.replace(/\/$/, "") || "/").replace(/:(\w+)/g, "{$1}")}`);
     expect(documented.sort()).toEqual(mounted.sort());
   });
 

@@ -46,7 +46,9 @@ export function clientsRouter(deps: Deps) {
       response: clientDetailDto,
       handler: async ({ actor, params }) => {
         assertClientScope(actor, params.id);
-        return getClient(db, params.id);
+        const detail = await getClient(db, params.id);
+        // The studio's own notes and its pending invitations are not for the client's eyes.
+        return actor.role === "client" ? { ...detail, notes: null, invitations: [] } : detail;
       },
     })
     .route({

@@ -1,0 +1,38 @@
+import { render, screen, within } from "@testing-library/react";
+import { createMemoryRouter, RouterProvider } from "react-router";
+import { describe, expect, it } from "vitest";
+import type { Role } from "@takeup/domain";
+import { navigationFor } from "../../config/navigation.ts";
+import { SideNav } from "./side-nav.tsx";
+
+function renderNav(role: Role, at = "/") {
+  const router = createMemoryRouter([{ path: "*", element: <SideNav items={navigationFor(role)} /> }], { initialEntries: [at] });
+  render(<RouterProvider router={router} />);
+  return within(screen.getByRole("navigation", { name: "Main" }));
+}
+
+const labels = (nav: ReturnType<typeof renderNav>) => nav.getAllByRole("link").map((link) => link.textContent);
+
+describe("SideNav", () => {
+  it("shows the owner every area, Team included", () => {
+    const nav = renderNav("owner");
+    expect(labels(nav)).toEqual(["Today", "Clients", "Team", "Studio settings", "Activity", "Caught e-mail"]);
+  });
+
+  it("shows a client only its own account, and no Team or Clients", () => {
+    const nav = renderNav("client");
+    expect(labels(nav)).toEqual(["Our account"]);
+    expect(nav.queryByRole("link", { name: "Team" })).not.toBeInTheDocument();
+    expect(nav.queryByRole("link", { name: "Clients" })).not.toBeInTheDocument();
+  });
+
+  it("gives the bookkeeper an overview and the clients list", () => {
+    expect(labels(renderNav("bookkeeper"))).toEqual(["Overview", "Clients"]);
+  });
+
+  it("marks the page you are on, and not home as well", () => {
+    const nav = renderNav("manager", "/clients/3");
+    expect(nav.getByRole("link", { name: "Clients" })).toHaveAttribute("aria-current", "page");
+    expect(nav.getByRole("link", { name: "Today" })).not.toHaveAttribute("aria-current");
+  });
+});

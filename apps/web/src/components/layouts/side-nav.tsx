@@ -1,0 +1,34 @@
+import { NavLink } from "react-router";
+import type { NavItem } from "../../config/navigation.ts";
+import { cx } from "../../lib/cx.ts";
+
+type SideNavProps = { items: NavItem[]; onNavigate?: () => void };
+
+export function SideNav({ items, onNavigate }: SideNavProps) {
+  return (
+    <nav aria-label="Main">
+      <ul className="flex flex-col gap-0.5">
+        {items.map((item) => (
+          <li key={item.href}>
+            <NavLink
+              to={item.href}
+              // Home is "/", which every path starts with; only an exact match marks it current.
+              end={item.href === "/"}
+              onClick={onNavigate}
+              className={({ isActive }) =>
+                cx(
+                  "flex items-center rounded-md border-l-[3px] px-3 py-2 text-[0.9375rem] font-medium transition-colors",
+                  isActive
+                    ? "border-rust bg-rust-wash text-rust-deep"
+                    : "border-transparent text-ink hover:bg-paper-deep",
+                )
+              }
+            >
+              {item.label}
+            </NavLink>
+          </li>
+        ))}
+      </ul>
+    </nav>
+  );
+}

@@ -1,0 +1,13 @@
+import { cx } from "../../lib/cx.ts";
+
+export function Spinner({ className, label }: { className?: string; label?: string }) {
+  return (
+    <span className={cx("inline-flex items-center", className)}>
+      <svg className="size-4 animate-spin" viewBox="0 0 24 24" fill="none" aria-hidden="true">
+        <circle cx="12" cy="12" r="9" stroke="currentColor" strokeOpacity="0.25" strokeWidth="3" />
+        <path d="M21 12a9 9 0 0 0-9-9" stroke="currentColor" strokeWidth="3" strokeLinecap="round" />
+      </svg>
+      {label ? <span className="sr-only">{label}</span> : null}
+    </span>
+  );
+}

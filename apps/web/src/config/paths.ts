@@ -1,0 +1,34 @@
+/** Every screen's address in one place; links are built here, never by hand. */
+export const paths = {
+  home: { path: "/", getHref: () => "/" },
+  signIn: {
+    path: "/sign-in",
+    getHref: (next?: string, notice?: "password-changed") => {
+      const query = new URLSearchParams();
+      if (next && next !== "/") query.set("next", next);
+      if (notice) query.set("notice", notice);
+      const search = query.toString();
+      return search ? `/sign-in?${search}` : "/sign-in";
+    },
+  },
+  forgotPassword: { path: "/forgot-password", getHref: () => "/forgot-password" },
+  resetPassword: { path: "/reset-password", getHref: () => "/reset-password" },
+  invitation: { path: "/invitations/:token", getHref: (token: string) => `/invitations/${encodeURIComponent(token)}` },
+  clients: {
+    list: { path: "/clients", getHref: () => "/clients" },
+    detail: { path: "/clients/:clientId", getHref: (id: number) => `/clients/${id}` },
+  },
+  team: { path: "/team", getHref: () => "/team" },
+  settings: { path: "/settings", getHref: () => "/settings" },
+  activity: { path: "/activity", getHref: () => "/activity" },
+  devMail: { path: "/dev/mail", getHref: () => "/dev/mail" },
+} as const;
+
+/**
+ * Only our own relative paths may follow sign-in; anything else (another site, "//host")
+ * would let a crafted link bounce people off Takeup after they type their password.
+ */
+export function safeNext(next: string | null | undefined): string {
+  if (!next || !next.startsWith("/") || next.startsWith("//") || next.startsWith("/\\")) return paths.home.getHref();
+  return next;
+}

@@ -1,0 +1,17 @@
+import { useMutation, useQueryClient } from "@tanstack/react-query";
+import { clientDetailDto, type UpdateClientInput } from "@takeup/domain";
+import { api } from "../../../lib/api-client.ts";
+import { clientKeys } from "./client-keys.ts";
+
+export const updateClient = (id: number, input: UpdateClientInput) => api.patch(`/api/clients/${id}`, input, clientDetailDto);
+
+export function useUpdateClient(id: number) {
+  const queryClient = useQueryClient();
+  return useMutation({
+    mutationFn: (input: UpdateClientInput) => updateClient(id, input),
+    onSuccess: (client) => {
+      queryClient.setQueryData(clientKeys.detail(id), client);
+      return queryClient.invalidateQueries({ queryKey: clientKeys.lists() });
+    },
+  });
+}

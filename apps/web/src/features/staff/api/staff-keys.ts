@@ -1,0 +1,4 @@
+export const staffKeys = {
+  all: ["staff"] as const,
+  list: () => [...staffKeys.all, "list"] as const,
+};

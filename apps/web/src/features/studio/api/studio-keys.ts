@@ -1,0 +1,4 @@
+export const studioKeys = {
+  all: ["studio"] as const,
+  detail: () => [...studioKeys.all, "detail"] as const,
+};

@@ -1,0 +1,2 @@
+export declare const demoPassword: string;
+export declare const demoSignIns: [email: string, who: string][];
