@@ -20,6 +20,9 @@ describe("signing in", () => {
       const nav = page.getByRole("navigation", { name: "Main" });
       for (const label of role.sees) await expect.poll(() => nav.getByRole("link", { name: label }).count()).toBe(1);
       for (const label of role.hidden) expect(await nav.getByRole("link", { name: label }).count()).toBe(0);
+      // A full page load of the home address (not only in-app navigation) serves the app too.
+      await page.goto("/");
+      await expect.poll(() => page.getByRole("navigation", { name: "Main" }).count()).toBe(1);
       await context.close();
     });
   }

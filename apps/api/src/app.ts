@@ -80,7 +80,8 @@ export function createApp({ db, config, mailer, throttle = new SignInThrottle() 
     const indexHtml = path.join(config.webDist, "index.html");
     app.use("/assets", express.static(path.join(config.webDist, "assets"), { immutable: true, maxAge: "1y" }));
     app.use(express.static(config.webDist, { index: false }));
-    app.get("/*splat", (_req, res) => {
+    // "/{*splat}" also matches "/" itself, which "/*splat" does not in Express 5.
+    app.get("/{*splat}", (_req, res) => {
       res.setHeader("cache-control", "no-cache");
       res.sendFile(indexHtml);
     });

@@ -11,3 +11,29 @@ export * from "./contracts/invitations.ts";
 export * from "./contracts/dev-mail.ts";
 export * from "./contracts/audit.ts";
 export * from "./contracts/session.ts";
+export * from "./rooms/catalogue.ts";
+export * from "./bookings/status.ts";
+export * from "./bookings/cancellation-fee.ts";
+// Pricing: quotes for room time, premiums and engineer time.
+export { quote } from "./pricing/quote.ts";
+export { maxBookingMinutes, validateBooking } from "./pricing/validate-booking.ts";
+export { validateRateCard } from "./pricing/validate-rate-card.ts";
+export { PricingError, type PricingProblem, type PricingProblemCode } from "./pricing/pricing-problem.ts";
+export type {
+  AssignedEngineer,
+  Booking as PricedBooking,
+  EngineerRates,
+  LocalTimeWindow,
+  Quote,
+  QuoteLine,
+  QuoteLineKind,
+  RateCard,
+  Studio as PricingStudio,
+} from "./pricing/types.ts";
+// Payroll: punch rounding, overtime, pay periods, ISO weeks.
+export { computeOvertime } from "./payroll/compute-overtime.ts";
+export { roundPunch } from "./payroll/round-punch.ts";
+export { payPeriodContaining, payPeriodForWorkday, type PayPeriod, type PayPeriodSchedule } from "./payroll/pay-periods.ts";
+export { summarisePayPeriod, type PayPeriodSummary, type PayPeriodStaffTotals } from "./payroll/pay-period-summary.ts";
+export { formatIsoWeek, isoWeek, type IsoWeekDate } from "./payroll/iso-week.ts";
+export type * from "./payroll/types.ts";

@@ -27,11 +27,12 @@ import { createInvitation, pendingInvitationsWhere, sendInvitation, toPendingDto
 
 const orNull = (v: string | undefined) => (v === undefined || v.trim() === "" ? null : v.trim());
 
+// Correlated subqueries spelled out with table aliases: drizzle renders a bare column name
+// inside sql``, which the inner query would resolve against its own table.
 const primaryContactName = sql<string | null>`(
-  select ${clientContacts.name} from ${clientContacts}
-  where ${clientContacts.clientAccountId} = ${clientAccounts.id}
-  order by ${clientContacts.isPrimary} desc, ${clientContacts.position} asc limit 1)`;
-const userCount = sql<number>`(select count(*) from ${clientUsers} where ${clientUsers.clientAccountId} = ${clientAccounts.id})`;
+  select cc.name from client_contacts cc where cc.client_account_id = client_accounts.id
+  order by cc.is_primary desc, cc.position asc limit 1)`;
+const userCount = sql<number>`(select count(*) from client_users cu where cu.client_account_id = client_accounts.id)`;
 
 const summaryColumns = {
   id: clientAccounts.id,

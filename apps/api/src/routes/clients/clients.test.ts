@@ -20,6 +20,8 @@ describe("client accounts", () => {
     expect(response.status).toBe(200);
     const lantern = response.body.find((c: { name: string }) => c.name === "Lantern Static");
     expect(lantern).toMatchObject({ kind: "band", primaryContact: "Rosa Delacourt", userCount: 1 });
+    const label = response.body.find((c: { name: string }) => c.name === "Blue Hour Records");
+    expect(label).toMatchObject({ kind: "label", primaryContact: "Corin Mayfield", userCount: 0 });
   });
 
   it("creates a client with contacts in one transaction and audits it", async () => {
