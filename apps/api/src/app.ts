@@ -23,6 +23,12 @@ import { invitationsRouter } from "./routes/invitations/invitations.router.ts";
 import { meRouter, sessionRouter } from "./routes/session/session.router.ts";
 import { staffRouter } from "./routes/staff/staff.router.ts";
 import { studioRouter } from "./routes/studio/studio.router.ts";
+import { roomsRouter } from "./routes/rooms/rooms.router.ts";
+import { equipmentRouter } from "./routes/equipment/equipment.router.ts";
+import { engineerRatesRouter, engineersRouter } from "./routes/engineer-rates/engineer-rates.router.ts";
+import { projectsRouter } from "./routes/projects/projects.router.ts";
+import { bookingRequestsRouter, bookingsRouter, quotesRouter } from "./routes/bookings/bookings.router.ts";
+import { calendarFeedsRouter, feedsRouter } from "./routes/calendar-feeds/calendar-feeds.router.ts";
 
 export type AppDeps = { db: Db; config: AppConfig; mailer: Mailer; throttle?: SignInThrottle };
 
@@ -36,6 +42,16 @@ export function apiRouters(deps: Deps) {
     studioRouter(deps),
     staffRouter(deps),
     clientsRouter(deps),
+    projectsRouter(deps),
+    roomsRouter(deps),
+    equipmentRouter(deps),
+    engineerRatesRouter(deps),
+    engineersRouter(deps),
+    quotesRouter(deps),
+    bookingsRouter(deps),
+    bookingRequestsRouter(deps),
+    calendarFeedsRouter(deps),
+    feedsRouter(deps),
     auditRouter(deps),
     devMailRouter(deps),
   ];

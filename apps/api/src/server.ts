@@ -4,12 +4,14 @@ import { readConfig } from "./config.ts";
 import { createMailer } from "./lib/mailer.ts";
 import { logger } from "./lib/logger.ts";
 import { loadStudio } from "./routes/studio/studio.service.ts";
+import { startScheduler } from "./lib/scheduler.ts";
 
 const { config, databaseUrl, port } = readConfig();
 const { db, pool } = createDb(databaseUrl);
 const mailer = createMailer(db, config.smtpUrl, config.mailFrom, async () => (await loadStudio(db)).name);
 const app = createApp({ db, config, mailer });
 
+const stopScheduler = startScheduler(db, mailer);
 const server = app.listen(port, () => logger.info("takeup api listening", { port, appUrl: config.appUrl }));
 
 let closing = false;
@@ -17,6 +19,7 @@ async function shutdown(signal: string) {
   if (closing) return;
   closing = true;
   logger.info("shutting down", { signal });
+  stopScheduler();
   server.close();
   server.closeAllConnections();
   mailer.close();

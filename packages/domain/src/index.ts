@@ -37,3 +37,7 @@ export { payPeriodContaining, payPeriodForWorkday, type PayPeriod, type PayPerio
 export { summarisePayPeriod, type PayPeriodSummary, type PayPeriodStaffTotals } from "./payroll/pay-period-summary.ts";
 export { formatIsoWeek, isoWeek, type IsoWeekDate } from "./payroll/iso-week.ts";
 export type * from "./payroll/types.ts";
+export * from "./contracts/rooms.ts";
+export * from "./contracts/bookings.ts";
+export * from "./shared/format-time.ts";
+export { rateCardFromVersion, type RateCardVersionFields } from "./pricing/from-version.ts";

@@ -4,7 +4,7 @@ import path from "node:path";
 import { fileURLToPath } from "node:url";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { eq } from "drizzle-orm";
-import { clientAccounts, staffProfiles } from "@takeup/db";
+import { bookings, calendarFeedTokens, clientAccounts, staffProfiles } from "@takeup/db";
 import { createTestApp, type TestApp } from "../test/harness.ts";
 import { demo } from "../test/demo.ts";
 
@@ -29,6 +29,8 @@ const agents = new Map<Column, ReturnType<TestApp["client"]>>();
 let ownClientId: number;
 let otherClientId: number;
 let someStaffUserId: string;
+/** Bookings: Lantern Static's (the demo client's), and a wrapped one the demo engineer worked on. */
+let ids: { clientBooking: number; otherClientBooking: number; engineerBooking: number; otherEngineerBooking: number; otherFeed: number };
 
 beforeAll(async () => {
   t = await createTestApp();
@@ -42,12 +44,34 @@ beforeAll(async () => {
   otherClientId = other!.id;
   const [staff] = await t.db.select().from(staffProfiles).where(eq(staffProfiles.role, "engineer")).limit(1);
   someStaffUserId = staff!.userId;
+  const all = await t.db.select().from(bookings);
+  const byTitle = (title: string) => all.find((b) => b.title === title)!.id;
+  // Transitions on a wrapped booking answer 409, so walking the routes changes nothing.
+  ids = {
+    clientBooking: byTitle("Tracking live, day 1 of 3"),
+    otherClientBooking: byTitle("Drums and bass"),
+    engineerBooking: byTitle("Drums and bass"),
+    otherEngineerBooking: byTitle("Mix, songs 1–3"),
+    otherFeed: 0,
+  };
+  const [sam] = await t.db.select().from(staffProfiles).where(eq(staffProfiles.displayName, "Sam Reyes"));
+  const [feed] = await t.db.insert(calendarFeedTokens).values({ staffUserId: sam!.userId, tokenHash: "f".repeat(64) }).$returningId();
+  ids.otherFeed = feed!.id;
 });
 afterAll(() => t.close());
 
-function concretePath(template: string, clientId: number) {
+/** The path to call, for the caller's own row or (other = true) someone else's. */
+function concretePath(template: string, column: Column, other = false) {
+  let id: number;
+  if (template.startsWith("/api/bookings/")) {
+    id = column === "client" ? (other ? ids.otherClientBooking : ids.clientBooking) : other ? ids.otherEngineerBooking : ids.engineerBooking;
+  } else if (template.startsWith("/api/calendar-feeds/")) {
+    id = ids.otherFeed;
+  } else {
+    id = other ? otherClientId : ownClientId;
+  }
   return template
-    .replace("{id}", String(clientId))
+    .replace("{id}", String(id))
     .replace("{userId}", someStaffUserId)
     .replace("{token}", "x".repeat(43));
 }
@@ -68,14 +92,14 @@ describe("the access matrix in docs/roles.md", () => {
         const expected = matrix.get(operation)?.[column];
         const agent = agents.get(column)!;
         const call = (p: string) => agent[method.toLowerCase() as "get"](p);
-        const status = (await call(concretePath(template, ownClientId))).status;
+        const status = (await call(concretePath(template, column))).status;
         const refused = column === "signed out" ? status === 401 : status === 403;
         if (expected === "no" && !refused) mismatches.push(`${operation} as ${column}: expected refusal, got ${status}`);
         if ((expected === "yes" || expected === "own") && (status === 401 || status === 403)) {
           mismatches.push(`${operation} as ${column}: expected access, got ${status}`);
         }
         if (expected === "own" && template.includes("{id}")) {
-          const other = (await call(concretePath(template, otherClientId))).status;
+          const other = (await call(concretePath(template, column, true))).status;
           if (other !== 404) mismatches.push(`${operation} as ${column} on another account: expected 404, got ${other}`);
         }
       }

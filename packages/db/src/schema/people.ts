@@ -1,7 +1,7 @@
 import { boolean, index, int, mysqlEnum, mysqlTable, text, varchar } from "drizzle-orm/mysql-core";
 import { createdAt, id, refId, updatedAt, utc } from "./columns.ts";
 import { user } from "./auth.ts";
-import { clientKinds, roles, staffRoles } from "@takeup/domain";
+import { clientKinds, engineerGrades, roles, staffRoles } from "@takeup/domain";
 
 /** A member of staff: one row per staff user; the role decides what they may do. */
 export const staffProfiles = mysqlTable("staff_profiles", {
@@ -10,6 +10,8 @@ export const staffProfiles = mysqlTable("staff_profiles", {
     .references(() => user.id, { onDelete: "cascade" }),
   role: mysqlEnum("role", staffRoles).notNull(),
   displayName: varchar("display_name", { length: 120 }).notNull(),
+  /** For engineers: the grade clients are billed at (engineer or assistant). */
+  engineerGrade: mysqlEnum("engineer_grade", engineerGrades),
   active: boolean("active").notNull().default(true),
   createdAt: createdAt(),
   updatedAt: updatedAt(),

@@ -3,6 +3,7 @@ import { generateId } from "better-auth";
 import { hashPassword } from "better-auth/crypto";
 import type { ClientKind, StaffRole } from "@takeup/domain";
 import type { Db, Tx } from "../client.ts";
+import { seedStudioFloor } from "./demo-studio-floor.ts";
 import { account, clientAccounts, clientContacts, clientUsers, staffProfiles, studio, user } from "../schema/index.ts";
 
 export const demoPassword = "studio-demo-2026";
@@ -130,5 +131,6 @@ export async function seedDemo(db: Db): Promise<void> {
         await tx.insert(clientUsers).values({ userId, clientAccountId });
       }
     }
+    await seedStudioFloor(tx);
   });
 }

@@ -11,6 +11,9 @@ export const studioDto = z.object({
   address: z.string().nullable(),
   email: z.string().nullable(),
   phone: z.string().nullable(),
+  holdHours: z.number().int(),
+  depositBp: z.number().int(),
+  cancellationTiers: z.array(z.object({ noticeUnderHours: z.number(), feeBp: z.number() })),
 });
 export type StudioDto = z.infer<typeof studioDto>;
 
@@ -26,5 +29,16 @@ export const updateStudioInput = z.strictObject({
   address: optionalText(500),
   email: optionalEmail,
   phone: optionalText(40),
+  holdHours: z.number().int().min(1, "A hold lasts at least an hour").max(24 * 60, "Keep holds under 60 days").optional(),
+  depositBp: z.number().int().min(0).max(10000, "A deposit is at most 100%").optional(),
+  cancellationTiers: z
+    .array(
+      z.strictObject({
+        noticeUnderHours: z.number().int().min(1).max(24 * 365),
+        feeBp: z.number().int().min(0).max(10000, "A fee is at most 100%"),
+      }),
+    )
+    .max(6, "Keep to six tiers")
+    .optional(),
 });
 export type UpdateStudioInput = z.infer<typeof updateStudioInput>;

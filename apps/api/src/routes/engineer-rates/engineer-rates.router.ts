@@ -1,0 +1,81 @@
+import { and, asc, desc, eq } from "drizzle-orm";
+import { z } from "zod";
+import { engineerRates, staffProfiles } from "@takeup/db";
+import { createEngineerRateInput, engineerDto, engineerRateDto } from "@takeup/domain";
+import { ApiRouter } from "../../lib/api-router.ts";
+import { HttpError } from "../../lib/http-error.ts";
+import { writeAudit } from "../../lib/audit.ts";
+import type { Deps } from "../../deps.ts";
+
+export function engineerRatesRouter({ db }: Deps) {
+  const list = async () => {
+    const rows = await db
+      .select({ rate: engineerRates, staffName: staffProfiles.displayName })
+      .from(engineerRates)
+      .leftJoin(staffProfiles, eq(staffProfiles.userId, engineerRates.staffUserId))
+      .orderBy(desc(engineerRates.effectiveFrom), desc(engineerRates.id));
+    return rows.map(({ rate, staffName }) => ({
+      id: rate.id,
+      grade: rate.grade,
+      staffUserId: rate.staffUserId,
+      staffName: staffName ?? null,
+      hourlyRateCents: rate.hourlyRateCents,
+      effectiveFrom: rate.effectiveFrom.toISOString(),
+    }));
+  };
+  return new ApiRouter("/api/engineer-rates", "Rooms and rates")
+    .route({
+      method: "get",
+      path: "/",
+      summary: "Engineer rates billed to clients (per grade or per engineer), newest first",
+      access: ["owner", "manager", "bookkeeper"],
+      response: z.array(engineerRateDto),
+      handler: list,
+    })
+    .route({
+      method: "post",
+      path: "/",
+      summary: "Set a new engineer rate from a date; earlier bookings keep their quotes",
+      access: ["owner"],
+      body: createEngineerRateInput,
+      status: 201,
+      response: engineerRateDto,
+      handler: async ({ actor, body }) => {
+        const id = await db.transaction(async (tx) => {
+          if (body.staffUserId) {
+            const [staff] = await tx.select().from(staffProfiles).where(and(eq(staffProfiles.userId, body.staffUserId), eq(staffProfiles.role, "engineer")));
+            if (!staff) throw new HttpError(422, "not_an_engineer", "That person is not an engineer", [{ field: "staffUserId", rule: "engineer", message: "Choose an engineer" }]);
+          }
+          const values = {
+            grade: body.grade,
+            staffUserId: body.staffUserId ?? null,
+            hourlyRateCents: body.hourlyRateCents,
+            effectiveFrom: body.effectiveFrom ? new Date(body.effectiveFrom) : new Date(),
+            createdByUserId: actor.userId,
+          };
+          const [created] = await tx.insert(engineerRates).values(values).$returningId();
+          await writeAudit(tx, actor, "engineer_rate.added", { type: "engineer_rate", id: created!.id }, { after: values });
+          return created!.id;
+        });
+        return (await list()).find((r) => r.id === id)!;
+      },
+    });
+}
+
+export function engineersRouter({ db }: Deps) {
+  return new ApiRouter("/api/engineers", "Rooms and rates").route({
+    method: "get",
+    path: "/",
+    summary: "Active engineers who can be assigned to bookings, with their grade",
+    access: ["owner", "manager"],
+    response: z.array(engineerDto),
+    handler: async () => {
+      const rows = await db
+        .select()
+        .from(staffProfiles)
+        .where(and(eq(staffProfiles.role, "engineer"), eq(staffProfiles.active, true)))
+        .orderBy(asc(staffProfiles.displayName));
+      return rows.map((r) => ({ userId: r.userId, name: r.displayName, grade: r.engineerGrade ?? "engineer" }));
+    },
+  });
+}

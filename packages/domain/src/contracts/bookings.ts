@@ -1,0 +1,177 @@
+import { z } from "zod";
+import { bookingActions, bookingStatuses } from "../bookings/status.ts";
+import { engineerGrades, roomColours } from "../rooms/catalogue.ts";
+import { optionalText } from "./common.ts";
+
+const instant = z.iso.datetime({ offset: true, message: "Use an ISO date and time with an offset, e.g. 2026-12-07T10:00:00-06:00" });
+const engineerIds = z.array(z.string().min(1).max(36)).max(6, "At most six engineers on one booking");
+const equipmentIds = z.array(z.number().int().positive()).max(20, "At most twenty pieces of equipment");
+
+export const quoteLineDto = z.object({
+  kind: z.enum(["room_hourly", "room_day", "minimum_top_up", "after_hours_premium", "weekend_premium", "engineer"]),
+  label: z.string(),
+  quantity: z.number(),
+  unit: z.enum(["hour", "day"]),
+  unitAmountCents: z.number(),
+  amountCents: z.number(),
+  minutes: z.number(),
+  date: z.string().optional(),
+  engineerId: z.string().optional(),
+  explanation: z.string(),
+});
+
+export const quoteDto = z.object({
+  rateCardId: z.string(),
+  rateCardLabel: z.string(),
+  currency: z.string(),
+  timeZone: z.string(),
+  elapsedMinutes: z.number(),
+  billableMinutes: z.number(),
+  lines: z.array(quoteLineDto),
+  totalCents: z.number(),
+});
+
+export const quoteInput = z.strictObject({
+  roomId: z.number().int().positive(),
+  startsAt: instant,
+  endsAt: instant,
+  engineerIds: engineerIds.optional(),
+  equipmentIds: equipmentIds.optional(),
+});
+export type QuoteInput = z.infer<typeof quoteInput>;
+
+export const conflictDto = z.object({
+  resource: z.enum(["room", "engineer", "equipment"]),
+  name: z.string(),
+  bookingId: z.number(),
+  status: z.enum(bookingStatuses),
+  startsAt: z.string(),
+  endsAt: z.string(),
+  /** Left out when the one asking is a client: other clients' names are not theirs to see. */
+  clientName: z.string().nullable(),
+});
+export type ConflictDto = z.infer<typeof conflictDto>;
+
+export const quoteResultDto = z.object({
+  roomId: z.number(),
+  rateCardVersionId: z.number(),
+  quote: quoteDto,
+  depositRequiredCents: z.number(),
+  /** What is already in the way; empty when the slot is free. */
+  conflicts: z.array(conflictDto),
+  /** True when every conflict is a hold, so a second hold may queue behind it. */
+  canQueueBehindHold: z.boolean(),
+});
+export type QuoteResultDto = z.infer<typeof quoteResultDto>;
+
+export const createBookingInput = z.strictObject({
+  roomId: z.number().int().positive(),
+  clientAccountId: z.number().int().positive(),
+  projectId: z.number().int().positive().nullable().optional(),
+  startsAt: instant,
+  endsAt: instant,
+  engineerIds: engineerIds.optional(),
+  equipmentIds: equipmentIds.optional(),
+  title: optionalText(120),
+  notes: optionalText(2000),
+  /** "hold" pencils the slot (it lapses unless confirmed); "confirmed" books it outright. */
+  status: z.enum(["hold", "confirmed"]).default("hold"),
+  /** Queue as a second hold behind a first hold on the same slot. */
+  queueBehindHold: z.boolean().optional(),
+});
+export type CreateBookingInput = z.input<typeof createBookingInput>;
+/** The parsed request, with defaults applied (status). */
+export type CreateBookingCommand = z.output<typeof createBookingInput>;
+
+export const updateBookingInput = z.strictObject({
+  startsAt: instant.optional(),
+  endsAt: instant.optional(),
+  engineerIds: engineerIds.optional(),
+  equipmentIds: equipmentIds.optional(),
+  projectId: z.number().int().positive().nullable().optional(),
+  title: optionalText(120),
+  notes: optionalText(2000),
+});
+export type UpdateBookingInput = z.infer<typeof updateBookingInput>;
+
+export const bookingRequestInput = z.strictObject({
+  roomId: z.number().int().positive(),
+  startsAt: instant,
+  endsAt: instant,
+  projectId: z.number().int().positive().nullable().optional(),
+  notes: optionalText(2000),
+});
+export type BookingRequestInput = z.infer<typeof bookingRequestInput>;
+
+export const bookingsQuery = z.strictObject({
+  from: instant,
+  to: instant,
+  roomId: z.coerce.number().int().positive().optional(),
+  engineerId: z.string().min(1).max(36).optional(),
+  clientAccountId: z.coerce.number().int().positive().optional(),
+  status: z.enum(bookingStatuses).optional(),
+});
+export type BookingsQuery = z.infer<typeof bookingsQuery>;
+
+export const confirmBookingInput = z.strictObject({ depositReceived: z.boolean().optional() });
+export const cancelBookingInput = z.strictObject({ reason: optionalText(200) });
+
+export const cancellationPreviewDto = z.object({
+  feeCents: z.number(),
+  noticeMinutes: z.number(),
+  explanation: z.string(),
+});
+export type CancellationPreviewDto = z.infer<typeof cancellationPreviewDto>;
+
+export const bookingDto = z.object({
+  id: z.number(),
+  room: z.object({ id: z.number(), name: z.string(), colour: z.enum(roomColours) }),
+  client: z.object({ id: z.number(), name: z.string() }),
+  project: z.object({ id: z.number(), name: z.string() }).nullable(),
+  startsAt: z.string(),
+  endsAt: z.string(),
+  status: z.enum(bookingStatuses),
+  holdExpiresAt: z.string().nullable(),
+  /** For a second hold: the first hold it waits behind. */
+  queuedBehindId: z.number().nullable(),
+  engineers: z.array(z.object({ userId: z.string(), name: z.string(), grade: z.enum(engineerGrades) })),
+  equipment: z.array(z.object({ id: z.number(), name: z.string() })),
+  title: z.string().nullable(),
+  notes: z.string().nullable(),
+  rateCardVersionId: z.number(),
+  quote: quoteDto,
+  quoteTotalCents: z.number(),
+  depositRequiredCents: z.number(),
+  depositReceivedAt: z.string().nullable(),
+  requestedByClient: z.boolean(),
+  cancelledAt: z.string().nullable(),
+  cancellationReason: z.string().nullable(),
+  cancellationFeeCents: z.number().nullable(),
+  allowedActions: z.array(z.enum(bookingActions)),
+  createdAt: z.string(),
+});
+export type BookingDto = z.infer<typeof bookingDto>;
+
+export const projectDto = z.object({ id: z.number(), clientAccountId: z.number(), name: z.string(), notes: z.string().nullable(), active: z.boolean() });
+export type ProjectDto = z.infer<typeof projectDto>;
+export const createProjectInput = z.strictObject({
+  name: z.string().trim().min(1, "Enter the project's name").max(120),
+  notes: optionalText(2000),
+});
+export type CreateProjectInput = z.infer<typeof createProjectInput>;
+
+export const calendarFeedDto = z.object({
+  id: z.number(),
+  kind: z.enum(["room", "engineer"]),
+  roomId: z.number().nullable(),
+  staffUserId: z.string().nullable(),
+  name: z.string(),
+  createdAt: z.string(),
+  revokedAt: z.string().nullable(),
+  /** Shown once, when the feed is created: only a hash of the token is kept. */
+  url: z.string().nullable(),
+});
+export type CalendarFeedDto = z.infer<typeof calendarFeedDto>;
+export const createCalendarFeedInput = z
+  .strictObject({ roomId: z.number().int().positive().optional(), staffUserId: z.string().min(1).max(36).optional() })
+  .refine((v) => (v.roomId === undefined) !== (v.staffUserId === undefined), { message: "Give either a room or an engineer" });
