@@ -29,6 +29,8 @@ import { engineerRatesRouter, engineersRouter } from "./routes/engineer-rates/en
 import { projectsRouter } from "./routes/projects/projects.router.ts";
 import { bookingRequestsRouter, bookingsRouter, quotesRouter } from "./routes/bookings/bookings.router.ts";
 import { calendarFeedsRouter, feedsRouter } from "./routes/calendar-feeds/calendar-feeds.router.ts";
+import { timeClockRouter, timeEditsRouter, timeEntriesRouter } from "./routes/time-clock/time-clock.router.ts";
+import { payPeriodsRouter, payRatesRouter, payrollSettingsRouter } from "./routes/payroll/payroll.router.ts";
 
 export type AppDeps = { db: Db; config: AppConfig; mailer: Mailer; throttle?: SignInThrottle };
 
@@ -52,6 +54,12 @@ export function apiRouters(deps: Deps) {
     bookingRequestsRouter(deps),
     calendarFeedsRouter(deps),
     feedsRouter(deps),
+    timeClockRouter(deps),
+    timeEntriesRouter(deps),
+    timeEditsRouter(deps),
+    payPeriodsRouter(deps),
+    payrollSettingsRouter(deps),
+    payRatesRouter(deps),
     auditRouter(deps),
     devMailRouter(deps),
   ];

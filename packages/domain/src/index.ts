@@ -41,3 +41,6 @@ export * from "./contracts/rooms.ts";
 export * from "./contracts/bookings.ts";
 export * from "./shared/format-time.ts";
 export { rateCardFromVersion, type RateCardVersionFields } from "./pricing/from-version.ts";
+export * from "./payroll/settings-catalogue.ts";
+export * from "./contracts/time.ts";
+export { addDays as addCalendarDays, workdayOf, workdayStart, workweekContaining, type Workweek } from "./payroll/studio-calendar.ts";

@@ -4,3 +4,4 @@ export * from "./people.ts";
 export * from "./audit.ts";
 export * from "./rooms.ts";
 export * from "./bookings.ts";
+export * from "./time.ts";

@@ -1,5 +1,5 @@
-import { char, int, json, mysqlTable, text, tinyint, varchar } from "drizzle-orm/mysql-core";
-import type { CancellationTier } from "@takeup/domain";
+import { boolean, char, int, json, mysqlEnum, mysqlTable, text, tinyint, varchar } from "drizzle-orm/mysql-core";
+import { overtimeRuleSets, payPeriodKinds, punchRoundings, type CancellationTier } from "@takeup/domain";
 import { updatedAt } from "./columns.ts";
 
 /** The one studio this deployment serves: a single row with id 1. */
@@ -24,6 +24,16 @@ export const studio = mysqlTable("studio", {
       { noticeUnderHours: 48, feeBp: 5000 },
       { noticeUnderHours: 168, feeBp: 2500 },
     ]),
+  /** Local hour the workweek (and every workday) starts at (29 CFR 778.105). */
+  workweekStartHour: tinyint("workweek_start_hour").notNull().default(0),
+  payPeriodKind: mysqlEnum("pay_period_kind", payPeriodKinds).notNull().default("weekly"),
+  /** For fortnightly periods: the first day of any one period (YYYY-MM-DD). */
+  payPeriodAnchor: char("pay_period_anchor", { length: 10 }).notNull().default("2026-01-05"),
+  punchRounding: mysqlEnum("punch_rounding", punchRoundings).notNull().default("none"),
+  overtimeRules: mysqlEnum("overtime_rules", overtimeRuleSets).notNull().default("federal_weekly"),
+  roundRegularRateToCent: boolean("round_regular_rate_to_cent").notNull().default(false),
+  /** An entry still open after this many hours is flagged for review (never closed silently). */
+  openEntryLimitHours: int("open_entry_limit_hours").notNull().default(16),
   updatedAt: updatedAt(),
 });
 

@@ -4,6 +4,7 @@ import { hashPassword } from "better-auth/crypto";
 import type { ClientKind, StaffRole } from "@takeup/domain";
 import type { Db, Tx } from "../client.ts";
 import { seedStudioFloor } from "./demo-studio-floor.ts";
+import { seedTime } from "./demo-time.ts";
 import { account, clientAccounts, clientContacts, clientUsers, staffProfiles, studio, user } from "../schema/index.ts";
 
 export const demoPassword = "studio-demo-2026";
@@ -132,5 +133,6 @@ export async function seedDemo(db: Db): Promise<void> {
       }
     }
     await seedStudioFloor(tx);
+    await seedTime(tx);
   });
 }

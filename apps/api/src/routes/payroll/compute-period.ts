@@ -1,0 +1,67 @@
+import { and, asc, gte, lt, isNotNull } from "drizzle-orm";
+import { payRates, staffProfiles, timeEntries, type DbOrTx, type PayPeriodRow } from "@takeup/db";
+import {
+  computeOvertime,
+  payPeriodForWorkday,
+  summarisePayPeriod,
+  workdayOf,
+  type OvertimeResult,
+  type PayPeriod,
+  type PayPeriodSummary,
+  type PayRate,
+  type TimeEntry,
+  type TimeEntryDto,
+} from "@takeup/domain";
+import { HttpError } from "../../lib/http-error.ts";
+import { loadEntryDtos } from "../time-clock/entry-dto.ts";
+import type { PayrollContext } from "./payroll-settings.ts";
+
+const day = 86_400_000;
+
+export type ComputedPeriod = {
+  period: PayPeriod;
+  summary: PayPeriodSummary;
+  result: OvertimeResult;
+  /** Every entry the period's workweeks touch, including open ones (not paid until closed). */
+  entries: TimeEntryDto[];
+  names: Map<string, string>;
+  unpriced: TimeEntryDto[];
+};
+
+/**
+ * Runs the rules engine over every closed entry of the workweeks that close in the period
+ * (a workweek straddling two periods is paid whole in the later one, see docs/payroll-rules.md).
+ */
+export async function computePeriod(db: DbOrTx, payroll: PayrollContext, row: PayPeriodRow): Promise<ComputedPeriod> {
+  const period = payPeriodForWorkday(row.startDate, payroll.schedule, payroll.settings);
+  const from = new Date(period.start.getTime() - 8 * day);
+  const entries = await loadEntryDtos(db, and(gte(timeEntries.startedAt, from), lt(timeEntries.startedAt, period.end)), payroll.dto.openEntryLimitHours);
+  const rateRows = await db.select().from(payRates).where(isNotNull(payRates.id)).orderBy(asc(payRates.effectiveFrom));
+  const rates: PayRate[] = rateRows.map((r) => ({ staffId: r.staffUserId, rateCode: r.code, centsPerHour: r.hourlyRateCents, effectiveFrom: r.effectiveFrom }));
+  const hasRate = (e: TimeEntryDto) => {
+    const workday = workdayOf(new Date(e.startedAt), payroll.settings);
+    return rates.some((r) => r.staffId === e.staffUserId && r.rateCode === e.payRateCode && r.effectiveFrom <= workday);
+  };
+  const closed = entries.filter((e) => e.endedAt !== null);
+  const unpriced = closed.filter((e) => !hasRate(e));
+  const engineInput: TimeEntry[] = closed
+    .filter(hasRate)
+    .map((e) => ({
+      id: String(e.id),
+      staffId: e.staffUserId,
+      start: new Date(e.startedAt),
+      end: new Date(e.endedAt!),
+      unpaidBreaks: e.breaks.map((b) => ({ start: new Date(b.startedAt), end: new Date(b.endedAt ?? e.endedAt!) })),
+      rateCode: e.payRateCode,
+    }));
+  let result: OvertimeResult;
+  try {
+    result = computeOvertime({ entries: engineInput, payRates: rates, settings: payroll.settings });
+  } catch (error) {
+    if (error instanceof RangeError) throw new HttpError(422, "payroll_unresolvable", `The period's time cannot be computed: ${error.message}`);
+    throw error;
+  }
+  const summary = summarisePayPeriod(period, result.workweeks);
+  const staff = await db.select({ userId: staffProfiles.userId, name: staffProfiles.displayName }).from(staffProfiles);
+  return { period, summary, result, entries, names: new Map(staff.map((s) => [s.userId, s.name])), unpriced };
+}
