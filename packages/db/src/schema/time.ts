@@ -2,7 +2,7 @@ import { char, index, int, json, mysqlEnum, mysqlTable, unique, varchar } from "
 import { createdAt, id, refId, updatedAt, utc } from "./columns.ts";
 import { user } from "./auth.ts";
 import { bookings } from "./bookings.ts";
-import { editStatuses, payPeriodKinds, payPeriodStatuses, timeEntryKinds, timeEntrySources } from "@takeup/domain";
+import { editStatuses, payPeriodKinds, payPeriodStatuses, timeEntryKinds, timeEntrySources, type PayRate, type PayrollSettings } from "@takeup/domain";
 
 /** What a member of staff is paid per hour for one kind of work, from a date. */
 export const payRates = mysqlTable(
@@ -101,6 +101,9 @@ export const payPeriods = mysqlTable(
     approvedAt: utc("approved_at"),
     lockedByUserId: varchar("locked_by_user_id", { length: 36 }).references(() => user.id),
     lockedAt: utc("locked_at"),
+    /** What the figures were computed with when the period was locked, so later setting or rate changes cannot alter it. */
+    lockedSettings: json("locked_settings").$type<PayrollSettings>(),
+    lockedPayRates: json("locked_pay_rates").$type<PayRate[]>(),
     createdAt: createdAt(),
     updatedAt: updatedAt(),
   },

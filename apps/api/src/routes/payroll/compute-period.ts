@@ -18,6 +18,11 @@ import type { PayrollContext } from "./payroll-settings.ts";
 
 const day = 86_400_000;
 
+export async function currentPayRates(db: DbOrTx): Promise<PayRate[]> {
+  const rows = await db.select().from(payRates).where(isNotNull(payRates.id)).orderBy(asc(payRates.effectiveFrom));
+  return rows.map((r) => ({ staffId: r.staffUserId, rateCode: r.code, centsPerHour: r.hourlyRateCents, effectiveFrom: r.effectiveFrom }));
+}
+
 export type ComputedPeriod = {
   period: PayPeriod;
   summary: PayPeriodSummary;
@@ -36,10 +41,11 @@ export async function computePeriod(db: DbOrTx, payroll: PayrollContext, row: Pa
   const period = payPeriodForWorkday(row.startDate, payroll.schedule, payroll.settings);
   const from = new Date(period.start.getTime() - 8 * day);
   const entries = await loadEntryDtos(db, and(gte(timeEntries.startedAt, from), lt(timeEntries.startedAt, period.end)), payroll.dto.openEntryLimitHours);
-  const rateRows = await db.select().from(payRates).where(isNotNull(payRates.id)).orderBy(asc(payRates.effectiveFrom));
-  const rates: PayRate[] = rateRows.map((r) => ({ staffId: r.staffUserId, rateCode: r.code, centsPerHour: r.hourlyRateCents, effectiveFrom: r.effectiveFrom }));
+  // A locked period is computed with the settings and rates it was locked with.
+  const settings = row.status === "locked" && row.lockedSettings ? row.lockedSettings : payroll.settings;
+  const rates = row.status === "locked" && row.lockedPayRates ? row.lockedPayRates : await currentPayRates(db);
   const hasRate = (e: TimeEntryDto) => {
-    const workday = workdayOf(new Date(e.startedAt), payroll.settings);
+    const workday = workdayOf(new Date(e.startedAt), settings);
     return rates.some((r) => r.staffId === e.staffUserId && r.rateCode === e.payRateCode && r.effectiveFrom <= workday);
   };
   const closed = entries.filter((e) => e.endedAt !== null);
@@ -56,7 +62,7 @@ export async function computePeriod(db: DbOrTx, payroll: PayrollContext, row: Pa
     }));
   let result: OvertimeResult;
   try {
-    result = computeOvertime({ entries: engineInput, payRates: rates, settings: payroll.settings });
+    result = computeOvertime({ entries: engineInput, payRates: rates, settings });
   } catch (error) {
     if (error instanceof RangeError) throw new HttpError(422, "payroll_unresolvable", `The period's time cannot be computed: ${error.message}`);
     throw error;

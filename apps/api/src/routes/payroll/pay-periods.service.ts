@@ -5,7 +5,7 @@ import { payPeriodContaining, payrollCaution, type PayPeriodDto, type PayPeriodR
 import { conflict, HttpError, notFound } from "../../lib/http-error.ts";
 import { writeAudit } from "../../lib/audit.ts";
 import type { Actor } from "../../lib/actor.ts";
-import { computePeriod } from "./compute-period.ts";
+import { computePeriod, currentPayRates } from "./compute-period.ts";
 import { loadPayroll, type PayrollContext } from "./payroll-settings.ts";
 
 const approver = alias(user, "approver");
@@ -139,8 +139,11 @@ export async function movePayPeriod(db: Db, actor: Actor, id: number, move: Move
     const now = new Date();
     const changes: Partial<PayPeriodRow> = { status: rule.to };
     if (move === "approve") Object.assign(changes, { approvedByUserId: actor.userId, approvedAt: now });
-    if (move === "lock") Object.assign(changes, { lockedByUserId: actor.userId, lockedAt: now });
-    if (move === "unlock" || move === "reopen") Object.assign(changes, { lockedByUserId: null, lockedAt: null, approvedByUserId: null, approvedAt: null });
+    if (move === "lock") {
+      const payroll = await loadPayroll(tx);
+      Object.assign(changes, { lockedByUserId: actor.userId, lockedAt: now, lockedSettings: payroll.settings, lockedPayRates: await currentPayRates(tx) });
+    }
+    if (move === "unlock" || move === "reopen") Object.assign(changes, { lockedByUserId: null, lockedAt: null, approvedByUserId: null, approvedAt: null, lockedSettings: null, lockedPayRates: null });
     await tx.update(payPeriods).set(changes).where(eq(payPeriods.id, id));
     await writeAudit(tx, actor, `pay_period.${move === "approve" ? "approved" : move === "lock" ? "locked" : move === "reopen" ? "reopened" : "unlocked"}`, { type: "pay_period", id }, {
       before: { status: row.status },

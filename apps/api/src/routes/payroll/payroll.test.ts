@@ -99,6 +99,16 @@ describe("locking and exports", () => {
     await books.post(`/api/pay-periods/${periodId}/lock`);
   });
 
+  it("keeps a locked period's figures when the owner later changes rounding or pay rates", async () => {
+    const before = (await books.get(`/api/pay-periods/${periodId}`)).body;
+    expect(before.period.status).toBe("locked");
+    await owner.patch("/api/payroll-settings").send({ overtimeRules: "daily_weekly_seventh_day", punchRounding: "5" });
+    await owner.post("/api/pay-rates").send({ staffUserId: joId, code: "assistant", hourlyRateCents: 9900, effectiveFrom: monday.toISODate() });
+    const after = (await books.get(`/api/pay-periods/${periodId}`)).body;
+    expect(after.staff).toEqual(before.staff);
+    await owner.patch("/api/payroll-settings").send({ overtimeRules: "federal_weekly", punchRounding: "15" });
+  });
+
   it("exports an XLSX whose figures match the review, read back with exceljs and with read-excel-file", async () => {
     const review = (await books.get(`/api/pay-periods/${periodId}`)).body;
     const response = await books.get(`/api/pay-periods/${periodId}/export?format=xlsx`).buffer(true).parse(binary);

@@ -1,0 +1,2 @@
+ALTER TABLE `pay_periods` ADD `locked_settings` json;--> statement-breakpoint
+ALTER TABLE `pay_periods` ADD `locked_pay_rates` json;
