@@ -20,12 +20,16 @@ describe("the app's routes", () => {
   });
 
   it("greets a client with its own account on the home page", async () => {
-    mockApi([...signedInAs(clientUser), { method: "GET", path: "/api/clients/1", reply: { body: lanternStatic } }]);
+    mockApi([
+      ...signedInAs(clientUser),
+      { method: "GET", path: "/api/clients/1", reply: { body: lanternStatic } },
+      { method: "GET", path: "/api/bookings", reply: { body: [] } },
+    ]);
     renderWithApp(null, { at: "/", routes });
 
     expect(await screen.findByRole("heading", { name: "Lantern Static", level: 1 })).toBeInTheDocument();
     const nav = within(screen.getByRole("navigation", { name: "Main" }));
-    expect(nav.getAllByRole("link").map((l) => l.textContent)).toEqual(["Our account"]);
+    expect(nav.getAllByRole("link").map((l) => l.textContent)).toEqual(["Our account", "Sessions"]);
     expect(screen.getByRole("heading", { name: "People with sign-ins" })).toBeInTheDocument();
   });
 

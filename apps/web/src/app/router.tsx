@@ -5,6 +5,8 @@ import { paths } from "../config/paths.ts";
 import { RequireRole } from "./require-role.tsx";
 import { ActivityRoute } from "./routes/activity/activity.tsx";
 import { AppRoot } from "./routes/app-root.tsx";
+import { BookingsRoute } from "./routes/bookings/bookings.tsx";
+import { CalendarRoute } from "./routes/calendar/calendar.tsx";
 import { AcceptInvitationRoute } from "./routes/auth/accept-invitation.tsx";
 import { ForgotPasswordRoute } from "./routes/auth/forgot-password.tsx";
 import { ResetPasswordRoute } from "./routes/auth/reset-password.tsx";
@@ -14,7 +16,10 @@ import { ClientsRoute } from "./routes/clients/clients.tsx";
 import { DevMailRoute } from "./routes/dev/mail.tsx";
 import { HomeRoute } from "./routes/home/home.tsx";
 import { NotFoundRoute } from "./routes/not-found.tsx";
+import { RoomsRoute } from "./routes/rooms/rooms.tsx";
 import { RouteError } from "./routes/route-error.tsx";
+import { MySessionsRoute } from "./routes/sessions/my-sessions.tsx";
+import { SessionsRoute } from "./routes/sessions/sessions.tsx";
 import { SettingsRoute } from "./routes/settings/settings.tsx";
 import { TeamRoute } from "./routes/team/team.tsx";
 
@@ -44,6 +49,46 @@ export const routes: RouteObject[] = [
             element: (
               <RequireRole roles={areaRoles.clients}>
                 <ClientRoute />
+              </RequireRole>
+            ),
+          },
+          {
+            path: paths.calendar.path,
+            element: (
+              <RequireRole roles={areaRoles.calendar}>
+                <CalendarRoute />
+              </RequireRole>
+            ),
+          },
+          {
+            path: paths.bookings.path,
+            element: (
+              <RequireRole roles={areaRoles.bookings}>
+                <BookingsRoute />
+              </RequireRole>
+            ),
+          },
+          {
+            path: paths.rooms.path,
+            element: (
+              <RequireRole roles={areaRoles.rooms}>
+                <RoomsRoute />
+              </RequireRole>
+            ),
+          },
+          {
+            path: paths.mySessions.path,
+            element: (
+              <RequireRole roles={areaRoles.mySessions}>
+                <MySessionsRoute />
+              </RequireRole>
+            ),
+          },
+          {
+            path: paths.sessions.path,
+            element: (
+              <RequireRole roles={areaRoles.sessions}>
+                <SessionsRoute />
               </RequireRole>
             ),
           },

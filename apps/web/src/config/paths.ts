@@ -18,6 +18,20 @@ export const paths = {
     list: { path: "/clients", getHref: () => "/clients" },
     detail: { path: "/clients/:clientId", getHref: (id: number) => `/clients/${id}` },
   },
+  calendar: {
+    path: "/calendar",
+    getHref: (at?: { date?: string; view?: "day" | "week" }) => {
+      const query = new URLSearchParams();
+      if (at?.view) query.set("view", at.view);
+      if (at?.date) query.set("date", at.date);
+      const search = query.toString();
+      return search ? `/calendar?${search}` : "/calendar";
+    },
+  },
+  bookings: { path: "/bookings", getHref: () => "/bookings" },
+  rooms: { path: "/rooms", getHref: () => "/rooms" },
+  mySessions: { path: "/my-sessions", getHref: () => "/my-sessions" },
+  sessions: { path: "/sessions", getHref: () => "/sessions" },
   team: { path: "/team", getHref: () => "/team" },
   settings: { path: "/settings", getHref: () => "/settings" },
   activity: { path: "/activity", getHref: () => "/activity" },

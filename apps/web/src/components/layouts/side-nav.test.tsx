@@ -16,18 +16,38 @@ const labels = (nav: ReturnType<typeof renderNav>) => nav.getAllByRole("link").m
 describe("SideNav", () => {
   it("shows the owner every area, Team included", () => {
     const nav = renderNav("owner");
-    expect(labels(nav)).toEqual(["Today", "Clients", "Team", "Studio settings", "Activity", "Caught e-mail"]);
+    expect(labels(nav)).toEqual([
+      "Today",
+      "Calendar",
+      "Bookings",
+      "Clients",
+      "Rooms and rates",
+      "Team",
+      "Studio settings",
+      "Activity",
+      "Caught e-mail",
+    ]);
   });
 
-  it("shows a client only its own account, and no Team or Clients", () => {
+  it("gives the manager the calendar, bookings and rooms but not the owner's areas", () => {
+    const nav = renderNav("manager");
+    expect(labels(nav)).toEqual(["Today", "Calendar", "Bookings", "Clients", "Rooms and rates"]);
+    expect(nav.queryByRole("link", { name: "Team" })).not.toBeInTheDocument();
+  });
+
+  it("gives an engineer their day and their sessions, and nothing about clients or money", () => {
+    expect(labels(renderNav("engineer"))).toEqual(["My day", "My sessions"]);
+  });
+
+  it("shows a client only its own account and sessions, and no Team or Clients", () => {
     const nav = renderNav("client");
-    expect(labels(nav)).toEqual(["Our account"]);
+    expect(labels(nav)).toEqual(["Our account", "Sessions"]);
     expect(nav.queryByRole("link", { name: "Team" })).not.toBeInTheDocument();
     expect(nav.queryByRole("link", { name: "Clients" })).not.toBeInTheDocument();
   });
 
-  it("gives the bookkeeper an overview and the clients list", () => {
-    expect(labels(renderNav("bookkeeper"))).toEqual(["Overview", "Clients"]);
+  it("gives the bookkeeper an overview, the bookings and the clients list", () => {
+    expect(labels(renderNav("bookkeeper"))).toEqual(["Overview", "Bookings", "Clients"]);
   });
 
   it("marks the page you are on, and not home as well", () => {

@@ -27,6 +27,10 @@ type DataTableProps<T> = {
   emptyMessage?: string;
   /** Extra content under a row, shown when the row is expanded (row.toggleExpanded()). */
   renderSubRow?: (row: T) => ReactNode;
+  /** Opens a row on a mouse click anywhere in it; keep a button or link in the row for the keyboard. */
+  onRowClick?: (row: T) => void;
+  /** Hides the filter box when the screen has filters of its own. */
+  hideFilter?: boolean;
 };
 
 const sortNames = { asc: "ascending", desc: "descending" } as const;
@@ -41,6 +45,8 @@ export function DataTable<T>({
   initialSorting = [],
   emptyMessage = "Nothing here yet.",
   renderSubRow,
+  onRowClick,
+  hideFilter = false,
 }: DataTableProps<T>) {
   const [sorting, setSorting] = useState<SortingState>(initialSorting);
   const [globalFilter, setGlobalFilter] = useState("");
@@ -74,20 +80,23 @@ export function DataTable<T>({
 
   return (
     <div className="flex flex-col gap-3">
-      <div className="flex flex-wrap items-center gap-2">
-        <label htmlFor={filterId} className="text-sm font-semibold">
-          {filterLabel}
-        </label>
-        <input
-          id={filterId}
-          type="search"
-          value={globalFilter}
-          onChange={(event) => setGlobalFilter(event.target.value)}
-          placeholder="Type to narrow the list"
-          className="h-8 w-full max-w-xs rounded-md border border-line-strong bg-card px-2.5 text-sm placeholder:text-muted/70 focus-visible:border-rust"
-        />
-      </div>
-      <div className="overflow-x-auto rounded-lg border border-line bg-card">
+      {hideFilter ? null : (
+        <div className="flex flex-wrap items-center gap-2">
+          <label htmlFor={filterId} className="text-sm font-semibold">
+            {filterLabel}
+          </label>
+          <input
+            id={filterId}
+            type="search"
+            value={globalFilter}
+            onChange={(event) => setGlobalFilter(event.target.value)}
+            placeholder="Type to narrow the list"
+            className="h-8 w-full max-w-xs rounded-md border border-line-strong bg-card px-2.5 text-sm placeholder:text-muted/70 focus-visible:border-rust"
+          />
+        </div>
+      )}
+      {/* relative: screen-reader-only text inside the table must not escape the scrolling box and widen the page. */}
+      <div className="relative overflow-x-auto rounded-lg border border-line bg-card">
         <table aria-label={label} className="w-full border-collapse text-left text-sm tabular-nums">
           <thead className="border-b border-line bg-paper-deep/60 text-xs text-muted">
             {table.getHeaderGroups().map((group) => (
@@ -130,7 +139,18 @@ export function DataTable<T>({
             ) : (
               rows.map((row) => (
                 <Fragment key={row.id}>
-                  <tr className="border-b border-line last:border-b-0 hover:bg-paper/60">
+                  <tr
+                    className={cx("border-b border-line last:border-b-0 hover:bg-paper/60", onRowClick && "cursor-pointer")}
+                    onClick={
+                      onRowClick
+                        ? (event) => {
+                            // A click on a control in the row does its own thing.
+                            if ((event.target as HTMLElement).closest("button, a, input, select, textarea")) return;
+                            onRowClick(row.original);
+                          }
+                        : undefined
+                    }
+                  >
                     {row.getVisibleCells().map((cell) => (
                       <td key={cell.id} className="px-3 py-1.5 align-middle whitespace-nowrap">
                         {flexRender(cell.column.columnDef.cell, cell.getContext())}

@@ -10,11 +10,15 @@ type DialogProps = {
   onClose: () => void;
   title: string;
   description?: ReactNode;
-  size?: "sm" | "md" | "lg";
+  size?: "sm" | "md" | "lg" | "xl";
   children: ReactNode;
 };
 
-const widths = { sm: "max-w-md", md: "max-w-lg", lg: "max-w-2xl" };
+const widths = { sm: "max-w-md", md: "max-w-lg", lg: "max-w-2xl", xl: "max-w-5xl" };
+
+// Open panels, innermost last: a confirmation opened from a panel handles Escape and Tab,
+// and the panel behind it waits until it closes.
+const openPanels: HTMLElement[] = [];
 
 export function Dialog({ open, ...props }: DialogProps) {
   if (!open) return null;
@@ -42,11 +46,13 @@ function DialogPanel({ onClose, title, description, size = "md", children }: Omi
       panel.querySelector("[data-dialog-body]")?.querySelector<HTMLElement>(focusable) ??
       panel.querySelector<HTMLElement>(focusable);
     (first ?? panel).focus();
+    openPanels.push(panel);
     const { overflow } = document.body.style;
     document.body.style.overflow = "hidden";
 
     // Listening on the document keeps Escape and the Tab trap working even if focus strayed.
     const onKeyDown = (event: KeyboardEvent) => {
+      if (openPanels[openPanels.length - 1] !== panel) return;
       if (event.key === "Escape") {
         event.preventDefault();
         onCloseRef.current();
@@ -72,6 +78,7 @@ function DialogPanel({ onClose, title, description, size = "md", children }: Omi
     document.addEventListener("keydown", onKeyDown);
     return () => {
       document.removeEventListener("keydown", onKeyDown);
+      openPanels.splice(openPanels.indexOf(panel), 1);
       document.body.style.overflow = overflow;
       opener?.focus();
     };

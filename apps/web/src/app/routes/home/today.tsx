@@ -3,6 +3,7 @@ import { PageHeader } from "../../../components/ui/page-header.tsx";
 import { StatCard } from "../../../components/ui/stat-card.tsx";
 import { ErrorState, LoadingState } from "../../../components/ui/states.tsx";
 import { paths } from "../../../config/paths.ts";
+import { TodayBoard } from "../../../features/bookings/components/studio-sessions.tsx";
 import { useClients } from "../../../features/clients/api/get-clients.ts";
 import { useStaff } from "../../../features/staff/api/get-staff.ts";
 import { useStudio } from "../../../features/studio/api/get-studio.ts";
@@ -29,6 +30,9 @@ export function TodayPage({ me }: { me: MeDto }) {
   return (
     <>
       <PageHeader title="Today" description={<StudioDay me={me} timeZone={studio.data.timeZone} />} />
+      <div className="mb-6">
+        <TodayBoard timeZone={studio.data.timeZone} calendarHref={paths.calendar.getHref()} />
+      </div>
       {failed ? (
         <ErrorState error={failed.error} onRetry={() => void failed.refetch()} />
       ) : loading ? (

@@ -1,0 +1,13 @@
+import { queryOptions, useQuery } from "@tanstack/react-query";
+import { z } from "zod";
+import { projectDto } from "@takeup/domain";
+import { api } from "../../../lib/api-client.ts";
+import { projectKeys } from "./booking-keys.ts";
+
+export const getProjects = (clientId: number, signal?: AbortSignal) => api.get(`/api/clients/${clientId}/projects`, z.array(projectDto), signal);
+
+export const projectsQueryOptions = (clientId: number) =>
+  queryOptions({ queryKey: projectKeys.list(clientId), queryFn: ({ signal }) => getProjects(clientId, signal) });
+
+export const useProjects = (clientId: number | null) =>
+  useQuery({ ...projectsQueryOptions(clientId ?? 0), enabled: clientId !== null && clientId > 0 });

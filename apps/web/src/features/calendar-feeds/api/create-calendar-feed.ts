@@ -1,0 +1,17 @@
+import { useMutation, useQueryClient } from "@tanstack/react-query";
+import { calendarFeedDto } from "@takeup/domain";
+import { api } from "../../../lib/api-client.ts";
+import { calendarFeedKeys } from "./calendar-feed-keys.ts";
+
+export type CalendarFeedTarget = { roomId: number } | { staffUserId: string };
+
+/** The answer carries the feed's address, this once. */
+export const createCalendarFeed = (target: CalendarFeedTarget) => api.post("/api/calendar-feeds", target, calendarFeedDto);
+
+export function useCreateCalendarFeed() {
+  const queryClient = useQueryClient();
+  return useMutation({
+    mutationFn: createCalendarFeed,
+    onSuccess: () => queryClient.invalidateQueries({ queryKey: calendarFeedKeys.all }),
+  });
+}

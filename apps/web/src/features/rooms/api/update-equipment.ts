@@ -1,0 +1,15 @@
+import { useMutation, useQueryClient } from "@tanstack/react-query";
+import { equipmentDto, type UpdateEquipmentInput } from "@takeup/domain";
+import { api } from "../../../lib/api-client.ts";
+import { roomKeys } from "./room-keys.ts";
+
+/** Moving kit to another room is a change of its home room. */
+export const updateEquipment = (id: number, input: UpdateEquipmentInput) => api.patch(`/api/equipment/${id}`, input, equipmentDto);
+
+export function useUpdateEquipment(id: number) {
+  const queryClient = useQueryClient();
+  return useMutation({
+    mutationFn: (input: UpdateEquipmentInput) => updateEquipment(id, input),
+    onSuccess: () => queryClient.invalidateQueries({ queryKey: roomKeys.equipment() }),
+  });
+}

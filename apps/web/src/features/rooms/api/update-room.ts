@@ -1,0 +1,15 @@
+import { useMutation, useQueryClient } from "@tanstack/react-query";
+import { roomDto, type UpdateRoomInput } from "@takeup/domain";
+import { api } from "../../../lib/api-client.ts";
+import { roomKeys } from "./room-keys.ts";
+
+export const updateRoom = (id: number, input: UpdateRoomInput) => api.patch(`/api/rooms/${id}`, input, roomDto);
+
+export function useUpdateRoom(id: number) {
+  const queryClient = useQueryClient();
+  return useMutation({
+    mutationFn: (input: UpdateRoomInput) => updateRoom(id, input),
+    // Equipment lists show the home room's name, so they follow a rename too.
+    onSuccess: () => queryClient.invalidateQueries({ queryKey: roomKeys.all }),
+  });
+}

@@ -1,0 +1,207 @@
+import { useMemo, useState } from "react";
+import { useForm } from "react-hook-form";
+import { zodResolver } from "@hookform/resolvers/zod";
+import { z } from "zod";
+import { engineerGrades, formatMoney, type EngineerDto, type EngineerRateDto } from "@takeup/domain";
+import { Badge } from "../../../components/ui/badge.tsx";
+import { Button } from "../../../components/ui/button.tsx";
+import { DataTable, type ColumnDef } from "../../../components/ui/data-table.tsx";
+import { Dialog, DialogActions } from "../../../components/ui/dialog.tsx";
+import { FormAlert, FormField } from "../../../components/ui/form-field.tsx";
+import { Input } from "../../../components/ui/input.tsx";
+import { Select } from "../../../components/ui/select.tsx";
+import { useToast } from "../../../components/ui/use-toast.ts";
+import { ApiError } from "../../../lib/api-client.ts";
+import { applyApiErrors } from "../../../lib/form-errors.ts";
+import { formatStudioStamp, studioLocalDateTimeToIso } from "../../../lib/studio-time.ts";
+import { toMinorUnits } from "../../../lib/units.ts";
+import { useCreateEngineerRate } from "../api/create-engineer-rate.ts";
+import { engineerGradeLabels } from "./room-labels.ts";
+
+type Standing = "in_force" | "superseded" | "scheduled";
+const standingBadge: Record<Standing, { label: string; tone: "accent" | "muted" | "neutral" }> = {
+  in_force: { label: "In force", tone: "accent" },
+  superseded: { label: "Superseded", tone: "muted" },
+  scheduled: { label: "Scheduled", tone: "neutral" },
+};
+
+/** For each grade, and each engineer with a rate of their own, the latest rate that has started is the one billed. */
+export function rateStandings(rates: EngineerRateDto[], now = Date.now()): Map<number, Standing> {
+  const standings = new Map<number, Standing>();
+  const latest = new Map<string, EngineerRateDto>();
+  for (const rate of rates) {
+    if (Date.parse(rate.effectiveFrom) > now) {
+      standings.set(rate.id, "scheduled");
+      continue;
+    }
+    const key = `${rate.grade}:${rate.staffUserId ?? "*"}`;
+    const seen = latest.get(key);
+    if (!seen || Date.parse(rate.effectiveFrom) > Date.parse(seen.effectiveFrom)) latest.set(key, rate);
+  }
+  const current = new Set([...latest.values()].map((rate) => rate.id));
+  for (const rate of rates) if (!standings.has(rate.id)) standings.set(rate.id, current.has(rate.id) ? "in_force" : "superseded");
+  return standings;
+}
+
+type EngineerRatesProps = {
+  rates: EngineerRateDto[];
+  engineers: EngineerDto[];
+  currency: string;
+  timeZone: string;
+  canEdit: boolean;
+};
+
+export function EngineerRates({ rates, engineers, currency, timeZone, canEdit }: EngineerRatesProps) {
+  const [adding, setAdding] = useState(false);
+  const standings = useMemo(() => rateStandings(rates), [rates]);
+  const columns = useMemo<ColumnDef<EngineerRateDto>[]>(
+    () => [
+      {
+        id: "who",
+        header: "Billed for",
+        accessorFn: (r) => r.staffName ?? `Any ${engineerGradeLabels[r.grade].toLowerCase()}`,
+        cell: ({ row }) =>
+          row.original.staffName ? (
+            <span className="font-medium">{row.original.staffName}</span>
+          ) : (
+            <span>
+              Any <span className="lowercase">{engineerGradeLabels[row.original.grade]}</span>
+            </span>
+          ),
+      },
+      { id: "grade", header: "Grade", accessorFn: (r) => engineerGradeLabels[r.grade] },
+      { id: "rate", header: "Hourly rate", accessorFn: (r) => r.hourlyRateCents, cell: ({ row }) => formatMoney(row.original.hourlyRateCents, currency) },
+      {
+        id: "from",
+        header: "Effective from",
+        accessorFn: (r) => r.effectiveFrom,
+        cell: ({ row }) => <span className="whitespace-nowrap">{formatStudioStamp(row.original.effectiveFrom, timeZone)}</span>,
+      },
+      {
+        id: "standing",
+        header: "Status",
+        accessorFn: (r) => standingBadge[standings.get(r.id) ?? "superseded"].label,
+        cell: ({ row }) => {
+          const badge = standingBadge[standings.get(row.original.id) ?? "superseded"];
+          return <Badge tone={badge.tone}>{badge.label}</Badge>;
+        },
+      },
+    ],
+    [currency, timeZone, standings],
+  );
+
+  return (
+    <div className="flex flex-col gap-3">
+      <div className="flex flex-wrap items-center justify-between gap-2">
+        <p className="text-sm text-muted">What a client pays per hour for engineer time. A rate for one engineer wins over their grade&apos;s rate.</p>
+        {canEdit ? (
+          <Button variant="secondary" size="sm" onClick={() => setAdding(true)}>
+            Add an engineer rate
+          </Button>
+        ) : null}
+      </div>
+      <DataTable
+        label="Engineer rates"
+        filterLabel="Filter engineer rates"
+        hideFilter={rates.length < 10}
+        data={rates}
+        columns={columns}
+        getRowId={(r) => String(r.id)}
+        initialSorting={[{ id: "from", desc: true }]}
+        emptyMessage="No engineer rates yet: engineer time cannot be quoted until there is one per grade."
+      />
+      {canEdit ? (
+        <Dialog open={adding} onClose={() => setAdding(false)} title="Add an engineer rate" size="md">
+          <EngineerRateForm engineers={engineers} currency={currency} timeZone={timeZone} onDone={() => setAdding(false)} />
+        </Dialog>
+      ) : null}
+    </div>
+  );
+}
+
+const rateForm = z.object({
+  grade: z.enum(engineerGrades, "Choose engineer or assistant"),
+  staffUserId: z.string(),
+  hourlyRate: z.string().trim().regex(/^\d+(\.\d+)?$/, "Enter an amount such as 45 or 45.50"),
+  effectiveFrom: z.string(),
+});
+type RateFormValues = z.infer<typeof rateForm>;
+
+function EngineerRateForm({ engineers, currency, timeZone, onDone }: { engineers: EngineerDto[]; currency: string; timeZone: string; onDone: () => void }) {
+  const toast = useToast();
+  const create = useCreateEngineerRate();
+  const [formError, setFormError] = useState<string | null>(null);
+  const { register, handleSubmit, setError, formState, watch } = useForm<RateFormValues>({
+    resolver: zodResolver(rateForm),
+    defaultValues: { grade: "engineer", staffUserId: "", hourlyRate: "", effectiveFrom: "" },
+  });
+  const grade = watch("grade");
+
+  const submit = handleSubmit(async (values) => {
+    setFormError(null);
+    const effectiveFrom = values.effectiveFrom ? studioLocalDateTimeToIso(values.effectiveFrom, timeZone) : null;
+    try {
+      const saved = await create.mutateAsync({
+        grade: values.grade,
+        hourlyRateCents: toMinorUnits(values.hourlyRate, currency) ?? 0,
+        ...(values.staffUserId ? { staffUserId: values.staffUserId } : {}),
+        ...(effectiveFrom ? { effectiveFrom } : {}),
+      });
+      toast(`${saved.staffName ?? engineerGradeLabels[saved.grade]} rate saved`);
+      onDone();
+    } catch (error) {
+      const renamed =
+        error instanceof ApiError
+          ? new ApiError(error.status, error.code, error.message, error.details.map((d) => ({ ...d, field: d.field === "hourlyRateCents" ? "hourlyRate" : d.field })))
+          : error;
+      setFormError(applyApiErrors(renamed, setError, { fields: ["grade", "staffUserId", "hourlyRate", "effectiveFrom"] }));
+    }
+  });
+
+  const { errors } = formState;
+  return (
+    <form onSubmit={submit} noValidate className="flex flex-col gap-4">
+      <FormAlert message={formError} />
+      <FormField label="Grade" error={errors.grade?.message}>
+        {(field) => (
+          <Select {...field} {...register("grade")}>
+            {engineerGrades.map((g) => (
+              <option key={g} value={g}>
+                {engineerGradeLabels[g]}
+              </option>
+            ))}
+          </Select>
+        )}
+      </FormField>
+      <FormField label="Engineer" hint="Leave as the whole grade, or pick one person billed at their own rate." error={errors.staffUserId?.message}>
+        {(field) => (
+          <Select {...field} {...register("staffUserId")}>
+            <option value="">Everyone of this grade</option>
+            {engineers
+              .filter((e) => e.grade === grade)
+              .map((e) => (
+                <option key={e.userId} value={e.userId}>
+                  {e.name}
+                </option>
+              ))}
+          </Select>
+        )}
+      </FormField>
+      <FormField label="Hourly rate" hint={`${currency} per hour billed to the client.`} error={errors.hourlyRate?.message}>
+        {(field) => <Input {...field} {...register("hourlyRate")} inputMode="decimal" autoComplete="off" />}
+      </FormField>
+      <FormField label="Effective from" optional hint="Studio time. Leave empty to start now." error={errors.effectiveFrom?.message}>
+        {(field) => <Input {...field} {...register("effectiveFrom")} type="datetime-local" step={60} />}
+      </FormField>
+      <p className="text-sm text-muted">Bookings already made keep the engineer rates they were quoted at.</p>
+      <DialogActions>
+        <Button variant="secondary" onClick={onDone}>
+          Cancel
+        </Button>
+        <Button type="submit" pending={formState.isSubmitting}>
+          Save rate
+        </Button>
+      </DialogActions>
+    </form>
+  );
+}
