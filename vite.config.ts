@@ -22,7 +22,7 @@ export default defineConfig({
           root: "packages/domain",
           environment: "node",
           include: ["src/**/*.test.ts"],
-          setupFiles: ["../../tests/support/fail-on-console-error.ts"],
+          setupFiles: ["../../tests/support/fail-on-console-error.ts", "../../tests/support/fast-check-seed.ts"],
         },
       },
       {

@@ -5,7 +5,8 @@ import { assistant, houseEngineer, roomA, roomB, roomC, wrenfield } from "./wren
 
 export const fiveMinutesMs = 300_000;
 
-const guestEngineer: AssignedEngineer = { id: "eng-3", name: "Ines Marlowe", grade: "engineer", rateCentsOverride: 5250 };
+// A guest rate of $52.80 is 88¢ a minute, so any whole number of minutes bills whole cents (the whole-cent split property relies on it).
+const guestEngineer: AssignedEngineer = { id: "eng-3", name: "Ines Marlowe", grade: "engineer", rateCentsOverride: 5280 };
 
 export const engineersArb: fc.Arbitrary<AssignedEngineer[]> = fc.subarray([houseEngineer, assistant, guestEngineer]);
 
