@@ -1,0 +1,148 @@
+// Latency of the two hot booking reads, through the real service code:
+//   conflict check  — bookingTx (READ COMMITTED) → lockResources → findConflicts, as a booking write does
+//   calendar week   — listBookings for one room and 7 days (GET /api/bookings), and its raw SQL
+import type { Pool, RowDataPacket } from "mysql2/promise";
+import { drizzle } from "drizzle-orm/mysql2";
+import { schema, type Db } from "@takeup/db";
+import type { Actor } from "../../apps/api/src/lib/actor.ts";
+import { bookingTx, listBookings } from "../../apps/api/src/routes/bookings/bookings.service.ts";
+import { findConflicts, lockResources } from "../../apps/api/src/routes/bookings/occupancy.ts";
+import { studioZone } from "./fixtures.ts";
+import { calendarWeekRows } from "./calendar-sql.ts";
+import type { LoadedSpan } from "./load.ts";
+import type { Random } from "./random.ts";
+
+const minute = 60_000;
+const hour = 60 * minute;
+const day = 24 * hour;
+
+export type Latency = { p50: number; p95: number; n: number; meanRows: number };
+
+/** Nearest-rank percentile of an ascending list. */
+function percentile(sorted: number[], p: number): number {
+  return sorted[Math.min(sorted.length - 1, Math.max(0, Math.ceil((p / 100) * sorted.length) - 1))]!;
+}
+
+function summarise(times: number[], rows: number): Latency {
+  const sorted = [...times].sort((a, b) => a - b);
+  return { p50: percentile(sorted, 50), p95: percentile(sorted, 95), n: times.length, meanRows: rows / times.length };
+}
+
+/** Runs `warmUp` untimed rounds, then `iterations` timed ones; each round reports its own timings. */
+async function repeat(warmUp: number, iterations: number, round: (timed: boolean) => Promise<void>) {
+  for (let i = 0; i < warmUp; i++) await round(false);
+  for (let i = 0; i < iterations; i++) await round(true);
+}
+
+export type Window = { roomId: number; engineerId: string; turnoverMinutes: number; startsAt: Date; endsAt: Date };
+
+/** A 3–10 h session somewhere inside a room's data, on the half hour, with the room's first engineer. */
+export function randomWindow(spans: LoadedSpan[], random: Random): Window {
+  const span = spans[random.int(spans.length)]!;
+  const slots = Math.floor((span.to - span.from - 10 * hour) / (30 * minute));
+  const startsAt = span.from + random.int(slots) * 30 * minute;
+  return { roomId: span.roomId, engineerId: span.engineerIds[0], turnoverMinutes: span.turnoverMinutes, startsAt: new Date(startsAt), endsAt: new Date(startsAt + (3 + random.int(8)) * hour) };
+}
+
+/** A studio week (Chicago midnight to midnight, standard time) inside a room's data. */
+export function randomWeek(spans: LoadedSpan[], random: Random) {
+  const span = spans[random.int(spans.length)]!;
+  const firstMidnight = Math.ceil((span.from - 6 * hour) / day) * day + 6 * hour;
+  const days = Math.floor((span.to - firstMidnight) / day) - 7;
+  const from = firstMidnight + random.int(Math.max(1, days)) * day;
+  return { roomId: span.roomId, from: new Date(from), to: new Date(from + 7 * day) };
+}
+
+const conflictInput = (w: Window, now: Date) => ({
+  roomId: w.roomId,
+  engineerIds: [w.engineerId],
+  equipmentIds: [],
+  startsAt: w.startsAt,
+  endsAt: w.endsAt,
+  turnoverMinutes: w.turnoverMinutes,
+  timeZone: studioZone,
+  now,
+});
+
+export async function measureConflictCheck(db: Db, spans: LoadedSpan[], random: Random, warmUp: number, iterations: number) {
+  const whole: number[] = [];
+  const query: number[] = [];
+  let rows = 0;
+  await repeat(warmUp, iterations, async (timed) => {
+    const w = randomWindow(spans, random);
+    const started = performance.now();
+    let checked = 0;
+    const found = await bookingTx(db, async (tx) => {
+      await lockResources(tx, { roomId: w.roomId, engineerIds: [w.engineerId], equipmentIds: [] });
+      const before = performance.now();
+      const conflicts = await findConflicts(tx, conflictInput(w, new Date()));
+      checked = performance.now() - before;
+      return conflicts.length;
+    });
+    if (!timed) return;
+    whole.push(performance.now() - started);
+    query.push(checked);
+    rows += found;
+  });
+  return { transaction: summarise(whole, rows), findConflicts: summarise(query, rows) };
+}
+
+export async function measureCalendarWeek(db: Db, pool: Pool, actor: Actor, spans: LoadedSpan[], random: Random, warmUp: number, iterations: number) {
+  const service: number[] = [];
+  const raw: number[] = [];
+  let serviceRows = 0;
+  let rawRows = 0;
+  // The same weeks for both, alternating, so neither side gets a warmer cache.
+  await repeat(warmUp, iterations, async (timed) => {
+    const week = randomWeek(spans, random);
+    let started = performance.now();
+    const list = await listBookings(db, actor, { from: week.from.toISOString(), to: week.to.toISOString(), roomId: week.roomId });
+    const serviceTime = performance.now() - started;
+    started = performance.now();
+    const rows = await calendarWeekRows(pool, week.roomId, week.from, week.to);
+    const rawTime = performance.now() - started;
+    if (rows.bookings.length !== list.length) throw new Error(`raw SQL found ${rows.bookings.length} bookings, listBookings ${list.length}`);
+    if (!timed) return;
+    service.push(serviceTime);
+    raw.push(rawTime);
+    serviceRows += list.length;
+    rawRows += rows.bookings.length;
+  });
+  return { service: summarise(service, serviceRows), raw: summarise(raw, rawRows) };
+}
+
+export type PlanRow = Record<string, string | number | null>;
+export type Plan = { title: string; sql: string; rows: PlanRow[] };
+
+/**
+ * The plans of the statements the real code sends: a drizzle instance on the same pool with a
+ * logger records them, then MariaDB's ANALYZE runs each one and reports estimated and actual rows.
+ */
+export async function explainBookingReads(pool: Pool, spans: LoadedSpan[], random: Random, actor: Actor): Promise<Plan[]> {
+  const captured: { sql: string; params: unknown[] }[] = [];
+  const logged: Db = drizzle({ client: pool, schema, mode: "planetscale", casing: "snake_case", logger: { logQuery: (sql, params) => captured.push({ sql, params }) } });
+  const w = randomWindow(spans, random);
+  await bookingTx(logged, async (tx) => {
+    await lockResources(tx, { roomId: w.roomId, engineerIds: [w.engineerId], equipmentIds: [] });
+    await findConflicts(tx, conflictInput(w, new Date()));
+  });
+  const week = randomWeek(spans, random);
+  await listBookings(logged, actor, { from: week.from.toISOString(), to: week.to.toISOString(), roomId: week.roomId });
+
+  const pick = (title: string, test: (sql: string) => boolean) => {
+    const found = captured.find((q) => test(q.sql));
+    if (!found) throw new Error(`no captured statement for ${title}`);
+    return { title, ...found };
+  };
+  const statements = [
+    pick("Conflict check, room", (s) => s.startsWith("select") && s.includes("from `bookings` inner join `rooms`") && !s.includes("order by")),
+    pick("Conflict check, engineers", (s) => s.startsWith("select") && s.includes("from `booking_engineers` inner join `bookings`")),
+    pick("Calendar week (listBookings)", (s) => s.startsWith("select") && s.includes("from `bookings` inner join `rooms`") && s.includes("order by")),
+  ];
+  const plans: Plan[] = [];
+  for (const s of statements) {
+    const [rows] = await pool.query<RowDataPacket[]>(`ANALYZE ${s.sql}`, s.params);
+    plans.push({ title: s.title, sql: pool.format(s.sql, s.params), rows: rows.map((r) => ({ ...r }) as PlanRow) });
+  }
+  return plans;
+}

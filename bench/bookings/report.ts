@@ -1,0 +1,157 @@
+// Turns a run's numbers into Markdown: printed to stdout and written into docs/benchmarks.md
+// between this benchmark's markers, so other benchmarks can share the file.
+import { existsSync, readFileSync, writeFileSync } from "node:fs";
+import type { Latency, Plan } from "./measure.ts";
+import type { ApiProfile, Throughput } from "./throughput.ts";
+
+export const conflictGoalMs = 5;
+export const throughputGoalRatio = 0.5;
+
+export type SizeResult = {
+  bookings: number;
+  loadSeconds: number;
+  /** The host's 1-minute load average as measuring began and ended. */
+  loadAverage: [number, number];
+  conflict: { transaction: Latency; findConflicts: Latency };
+  calendar: { service: Latency; raw: Latency };
+  throughput: { api: Throughput; bare: Throughput; ratio: number; bookingsPerWeek: number };
+};
+
+export type Machine = { cpus: string; memory: string; os: string; node: string; mariadb: string; server: string };
+export type RunInfo = {
+  date: string;
+  machine: Machine;
+  iterations: number;
+  warmUp: number;
+  throughput: { seconds: number; connections: number; weeks: number };
+  sizes: SizeResult[];
+  plans: { bookings: number; plans: Plan[] } | null;
+  profile: (ApiProfile & { bookings: number }) | null;
+  totalSeconds: number;
+};
+
+const ms = (v: number) => (v < 10 ? v.toFixed(2) : v.toFixed(1));
+const count = (n: number) => n.toLocaleString("en-US");
+const pair = (l: Latency) => `${ms(l.p50)} / ${ms(l.p95)}`;
+/** A Markdown table; numbers read best right-aligned, so every column after the first is, unless `left`. */
+const table = (header: string[], rows: (string | number)[][], left = false) =>
+  [`| ${header.join(" | ")} |`, `| ${header.map((_, i) => (i === 0 || left ? "---" : "---:")).join(" | ")} |`, ...rows.map((r) => `| ${r.join(" | ")} |`)].join("\n");
+
+function goals(run: RunInfo) {
+  const largest = run.sizes.at(-1);
+  if (!largest) return "No size was measured.";
+  const conflict = largest.conflict.transaction.p95;
+  const ratio = largest.throughput.ratio;
+  const conflictMet = conflict < conflictGoalMs;
+  const ratioMet = ratio >= throughputGoalRatio;
+  const atMillion = largest.bookings >= 1_000_000;
+  const rows = [
+    [`Conflict check (lock + findConflicts, whole transaction) p95 under ${conflictGoalMs} ms at 1,000,000 bookings`, `${ms(conflict)} ms at ${count(largest.bookings)}`, atMillion ? (conflictMet ? "**met**" : "**missed**") : "not measured at 1 M"],
+    [`API throughput at least ${throughputGoalRatio}× the bare Express + mysql2 baseline`, `${ratio.toFixed(2)}× at ${count(largest.bookings)}`, atMillion ? (ratioMet ? "**met**" : "**missed**") : "not measured at 1 M"],
+  ];
+  return table(["Goal", "Result", "Verdict"], rows, true);
+}
+
+function summaryTable(run: RunInfo) {
+  return table(
+    ["Bookings", "Conflict check p50 / p95 ms", "findConflicts p50 / p95 ms", "Calendar week listBookings p50 / p95 ms", "Calendar week raw SQL p50 / p95 ms", "DB share (p50)", "API req/s", "Bare req/s", "API ÷ bare"],
+    run.sizes.map((s) => [
+      count(s.bookings),
+      pair(s.conflict.transaction),
+      pair(s.conflict.findConflicts),
+      pair(s.calendar.service),
+      pair(s.calendar.raw),
+      `${Math.round((s.calendar.raw.p50 / s.calendar.service.p50) * 100)} %`,
+      Math.round(s.throughput.api.reqPerSec),
+      Math.round(s.throughput.bare.reqPerSec),
+      `${s.throughput.ratio.toFixed(2)}×`,
+    ]),
+  );
+}
+
+function sizeSection(s: SizeResult) {
+  const latency = table(
+    ["Measure", "p50 ms", "p95 ms", "n", "rows per call"],
+    [
+      ["Conflict check: bookingTx → lockResources → findConflicts (room + 1 engineer)", ms(s.conflict.transaction.p50), ms(s.conflict.transaction.p95), s.conflict.transaction.n, s.conflict.transaction.meanRows.toFixed(2)],
+      ["… of which findConflicts", ms(s.conflict.findConflicts.p50), ms(s.conflict.findConflicts.p95), s.conflict.findConflicts.n, s.conflict.findConflicts.meanRows.toFixed(2)],
+      ["Calendar week: listBookings (one room, 7 days)", ms(s.calendar.service.p50), ms(s.calendar.service.p95), s.calendar.service.n, s.calendar.service.meanRows.toFixed(1)],
+      ["Calendar week: the same SQL through mysql2", ms(s.calendar.raw.p50), ms(s.calendar.raw.p95), s.calendar.raw.n, s.calendar.raw.meanRows.toFixed(1)],
+    ],
+  );
+  const t = s.throughput;
+  const http = table(
+    ["Target", "req/s", "p50 ms", "p99 ms", "requests", "non-2xx", "errors", "SQL statements per request"],
+    [
+      ["API: GET /api/bookings (createApp, session cookie)", Math.round(t.api.reqPerSec), t.api.p50, t.api.p99, count(t.api.requests), t.api.non2xx, t.api.errors, t.api.statementsPerRequest.toFixed(1)],
+      ["Bare: Express + mysql2, same SQL", Math.round(t.bare.reqPerSec), t.bare.p50, t.bare.p99, count(t.bare.requests), t.bare.non2xx, t.bare.errors, t.bare.statementsPerRequest.toFixed(1)],
+    ],
+  );
+  return `### ${count(s.bookings)} bookings\n\nLoaded in ${s.loadSeconds.toFixed(1)} s. Host load average while measuring: ${s.loadAverage[0].toFixed(1)} → ${s.loadAverage[1].toFixed(1)}.\n\n${latency}\n\n${http}\n\nAPI ÷ bare: **${t.ratio.toFixed(2)}×**; a calendar week of one room holds ${t.bookingsPerWeek} bookings in the probe week.`;
+}
+
+function planSection(plans: NonNullable<RunInfo["plans"]>) {
+  const columns = ["table", "type", "possible_keys", "key", "key_len", "ref", "rows", "r_rows", "filtered", "r_filtered", "Extra"];
+  const parts = plans.plans.map((p) => {
+    const rows = p.rows.map((r) => columns.map((c) => String(r[c] ?? "").replaceAll("|", "\\|")));
+    const keys = p.rows.map((r) => `\`${r.table}\` → \`${r.key ?? "none"}\``).join(", ");
+    return `#### ${p.title}\n\nKeys chosen: ${keys}.\n\n${table(columns, rows, true)}\n\n<details><summary>Statement</summary>\n\n\`\`\`sql\n${p.sql}\n\`\`\`\n</details>`;
+  });
+  return `### Query plans at ${count(plans.bookings)} bookings\n\nMariaDB \`ANALYZE\` of the statements the code sends (captured through a drizzle logger): \`rows\` is the optimiser's estimate, \`r_rows\` what it really read.\n\n${parts.join("\n\n")}`;
+}
+
+function profileSection(p: NonNullable<RunInfo["profile"]>) {
+  const pct = (v: number) => `${(v * 100).toFixed(1)} %`;
+  const byOrigin = table(["Layer (Node and V8 time charged to its caller)", "CPU ms", "share of busy"], p.byOrigin.map((o) => [o.name, Math.round(o.ms), pct(o.share)]));
+  const functions = table(["Function (self time)", "CPU ms", "share of busy"], p.functions.map((f) => [f.name.replaceAll("|", "\\|"), Math.round(f.ms), pct(f.share)]));
+  return `### Where the API's CPU goes (${count(p.bookings)} bookings)\n\nA separate ${p.seconds} s autocannon run (after the 3 s warm-up, start-up included) against the API started with \`--cpu-prof\`; the profiler slows the process, so only the shares matter. Busy ${Math.round(p.busyMs)} ms, idle ${Math.round(p.idleMs)} ms.\n\n${byOrigin}\n\n${functions}`;
+}
+
+export function renderMarkdown(run: RunInfo): string {
+  const m = run.machine;
+  return [
+    "## Bookings",
+    `Last run: ${run.date}, by \`npm run bench\` (\`bench/bookings/run.ts\`), ${Math.round(run.totalSeconds)} s in all.`,
+    "### What is measured",
+    [
+      "A private MariaDB (port 3309, data in a temp dir) is migrated and seeded with the Wrenfield Sound demo, then 20 bench rooms (two bench engineers each, 50 bench clients) are filled with synthetic bookings by multi-row INSERTs of 5,000 rows: consecutive 3–10 h sessions per room with the turnover kept free and 0.5–4 h gaps (and a dark day now and then), from 1990 onwards; 50 % confirmed, 35 % wrapped, 8 % holds (lapsing two days before the session), 7 % cancelled; about half have booking_engineers rows. The same database grows to each size in turn; `ANALYZE TABLE` refreshes the statistics after each load.",
+      `- **Conflict check**: the real \`bookingTx\` (READ COMMITTED) → \`lockResources\` → \`findConflicts\` for a random 3–10 h window in a random bench room with its engineer, timed as a whole and for \`findConflicts\` alone. ${run.warmUp} warm-up rounds, then ${run.iterations} timed.`,
+      `- **Calendar week**: the real \`listBookings\` (the service behind \`GET /api/bookings?roomId=&from=&to=\`, as the manager) for a random room and studio week, and the same three statements written out for mysql2, alternating on the same weeks; the ratio of their medians is the database's share. ${run.warmUp} warm-up rounds, then ${run.iterations} timed.`,
+      `- **Throughput**: the real app (\`createApp\`, signed in as the manager, the session cookie on every request) and a bare Express + mysql2 endpoint running the same SQL, each in its own process on a free port, hit by autocannon with ${run.throughput.connections} connections for ${run.throughput.seconds} s after a 3 s warm-up, cycling ${run.throughput.weeks} fixed room-weeks.`,
+      "Latencies are in milliseconds, measured in the bench process (so they include the round trips to MariaDB over loopback).",
+    ].join("\n"),
+    "### Machine",
+    [`- CPU: ${m.cpus}`, `- RAM: ${m.memory}`, `- OS: ${m.os}`, `- Node.js ${m.node}`, `- MariaDB ${m.mariadb} (${m.server})`, "- Everything — MariaDB, the server under test and autocannon — shares these cores, so req/s is a lower bound of what a separate database host would give."].join("\n"),
+    "### Goals",
+    goals(run),
+    "### Summary",
+    summaryTable(run),
+    ...run.sizes.map(sizeSection),
+    ...(run.plans ? [planSection(run.plans)] : []),
+    ...(run.profile ? [profileSection(run.profile)] : []),
+  ].join("\n\n");
+}
+
+const start = "<!-- bench:bookings:start -->";
+const end = "<!-- bench:bookings:end -->";
+const intro = `# Benchmarks
+
+Speed is measured by the scripts in \`bench/\` and recorded here, never by timed assertions in tests. Run them all from the repository root with:
+
+\`\`\`sh
+npm run bench        # every benchmark; rewrites its own section of this file
+npm run bench -- --sizes=10000,100000 --no-doc   # a quicker look that leaves this file alone
+\`\`\`
+
+Each section below is written by its benchmark between its markers; edit the benchmark, not the numbers.
+`;
+
+/** Replaces this benchmark's section of the doc, creating the file or the section as needed. */
+export function writeDoc(file: string, markdown: string) {
+  const section = `${start}\n${markdown}\n${end}`;
+  let text = existsSync(file) ? readFileSync(file, "utf8") : intro;
+  const from = text.indexOf(start);
+  const to = text.indexOf(end);
+  text = from >= 0 && to > from ? text.slice(0, from) + section + text.slice(to + end.length) : `${text.trimEnd()}\n\n${section}\n`;
+  writeFileSync(file, text);
+}

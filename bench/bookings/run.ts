@@ -1,0 +1,173 @@
+// The bookings benchmark: conflict-check and calendar-week latency, and API throughput against a
+// bare baseline, at 10 k, 100 k and 1 M bookings in one growing database. `npm run bench` runs it;
+// so does `npx tsx bench/bookings/run.ts [--sizes=10000,100000] [--iterations=500] [--seconds=10] [--no-doc]`.
+import { mkdtempSync, rmSync } from "node:fs";
+import { createServer } from "node:net";
+import os from "node:os";
+import path from "node:path";
+import { fileURLToPath } from "node:url";
+import type { RowDataPacket } from "mysql2/promise";
+import { createDb } from "@takeup/db";
+import { migrateDatabase } from "@takeup/db/migrate";
+import { seedDemo } from "@takeup/db/seed";
+import { loadActor } from "../../apps/api/src/lib/actor.ts";
+import { createBenchFixtures } from "./fixtures.ts";
+import { BookingLoader } from "./load.ts";
+import { explainBookingReads, measureCalendarWeek, measureConflictCheck } from "./measure.ts";
+import { createRandom } from "./random.ts";
+import { renderMarkdown, writeDoc, type RunInfo, type SizeResult } from "./report.ts";
+import { measureThroughput, profileApi, stopAllTargets } from "./throughput.ts";
+
+const root = fileURLToPath(new URL("../..", import.meta.url));
+const port = 3309;
+
+type MariaDb = { url: string; stop(): Promise<void> };
+type MariaDbHelper = { startMariaDb(options: { dir: string; port: number; database: string }): Promise<MariaDb> };
+
+function option(name: string): string | undefined {
+  const prefix = `--${name}=`;
+  return process.argv.find((a) => a.startsWith(prefix))?.slice(prefix.length);
+}
+const sizes = (option("sizes") ?? "10000,100000,1000000").split(",").map((s) => Number(s.replaceAll("_", "")));
+const iterations = Number(option("iterations") ?? 1000);
+const warmUp = Math.max(50, Math.round(iterations / 10));
+const throughputOptions = { seconds: Number(option("seconds") ?? 10), connections: 10, weeks: 64 };
+const writeTheDoc = !process.argv.includes("--no-doc");
+if (sizes.some((s) => !Number.isInteger(s) || s <= 0) || !(iterations >= 1) || !(throughputOptions.seconds >= 1)) {
+  throw new Error("usage: run.ts [--sizes=10000,100000,1000000] [--iterations=1000] [--seconds=10] [--no-doc]");
+}
+
+const say = (message: string) => process.stdout.write(`[bench] ${message}\n`);
+
+function portIsFree(p: number): Promise<boolean> {
+  return new Promise((resolve) => {
+    const probe = createServer()
+      .once("error", () => resolve(false))
+      .once("listening", () => probe.close(() => resolve(true)))
+      .listen(p, "127.0.0.1");
+  });
+}
+
+// bench.mjs hands us a temp dir (and removes it whatever happens); run alone, we make our own.
+const dir = process.env.TAKEUP_BENCH_DIR ?? mkdtempSync(path.join(os.tmpdir(), "takeup-bench-"));
+let mariadb: MariaDb | null = null;
+let closePool: (() => Promise<void>) | null = null;
+let cleaned = false;
+
+async function cleanUp() {
+  if (cleaned) return;
+  cleaned = true;
+  await stopAllTargets().catch(() => undefined);
+  await closePool?.().catch(() => undefined);
+  await mariadb?.stop().catch((error: unknown) => say(`could not stop MariaDB: ${String(error)}`));
+  rmSync(dir, { recursive: true, force: true });
+}
+
+for (const signal of ["SIGINT", "SIGTERM"] as const) {
+  process.once(signal, () => {
+    say(`${signal}: stopping`);
+    void cleanUp().finally(() => process.exit(130));
+  });
+}
+
+async function main() {
+  const started = performance.now();
+  if (!(await portIsFree(port))) throw new Error(`port ${port} is taken; the bench needs it for its private MariaDB`);
+  // The helper is plain Node (it runs before npm install), so it is loaded untyped and typed here.
+  const helperUrl = new URL("../../scripts/lib/mariadb.mjs", import.meta.url).href;
+  const { startMariaDb } = (await import(helperUrl)) as MariaDbHelper;
+  say(`starting a private MariaDB on port ${port} in ${dir}`);
+  mariadb = await startMariaDb({ dir, port, database: "takeup_bench" });
+  await migrateDatabase(mariadb.url);
+  const { db, pool } = createDb(mariadb.url, { connectionLimit: 10 });
+  closePool = () => pool.end();
+  await seedDemo(db);
+  const fixtures = await createBenchFixtures(db);
+  const actor = await loadActor(db, fixtures.managerId);
+  if (!actor) throw new Error("the demo manager has no actor");
+
+  const [[server]] = await pool.query<RowDataPacket[]>(
+    "SELECT VERSION() AS version, @@innodb_buffer_pool_size AS pool, @@innodb_flush_log_at_trx_commit AS flush, @@innodb_flush_method AS method",
+  );
+  const cpus = os.cpus();
+  const machine = {
+    cpus: `${cpus.length} × ${cpus[0]?.model.trim() ?? "unknown"}`,
+    memory: `${(os.totalmem() / 2 ** 30).toFixed(1)} GiB`,
+    os: `${os.type()} ${os.release()} (${os.arch()})`,
+    node: process.version,
+    mariadb: String(server!.version),
+    server: `as scripts/lib/mariadb.mjs starts it: innodb_buffer_pool_size ${Number(server!.pool) / 2 ** 20} MiB, innodb_flush_log_at_trx_commit ${server!.flush}, innodb_flush_method ${server!.method}`,
+  };
+  say(`${machine.cpus}, ${machine.memory}, Node ${machine.node}, MariaDB ${machine.mariadb}`);
+
+  const loader = new BookingLoader(pool, fixtures);
+  await loader.init();
+  const results: SizeResult[] = [];
+  let plans: RunInfo["plans"] = null;
+  let profile: RunInfo["profile"] = null;
+  for (const size of sizes) {
+    if (size < loader.total) throw new Error(`sizes must grow: ${size} is below the ${loader.total} bookings already loaded`);
+    say(`loading bookings up to ${size.toLocaleString("en-US")} …`);
+    const loadStarted = performance.now();
+    const from = loader.total;
+    const step = Math.max(10_000, Math.round((size - from) / 10 / 10_000) * 10_000);
+    let nextReport = from + step;
+    await loader.growTo(size, (loaded, target) => {
+      if (loaded < nextReport && loaded < target) return;
+      const seconds = (performance.now() - loadStarted) / 1000;
+      say(`  ${loaded.toLocaleString("en-US")} / ${target.toLocaleString("en-US")} bookings (${Math.round((loaded - from) / seconds).toLocaleString("en-US")} rows/s)`);
+      while (nextReport <= loaded) nextReport += step;
+    });
+    const loadSeconds = (performance.now() - loadStarted) / 1000;
+    // Fresh statistics, as InnoDB would have after its own background recalculation.
+    await pool.query("ANALYZE TABLE bookings, booking_engineers");
+    say(`loaded ${size.toLocaleString("en-US")} bookings in ${loadSeconds.toFixed(1)} s; measuring …`);
+
+    // Other work on this host skews the numbers; the doc records how busy it was.
+    const loadAverage = os.loadavg()[0]!;
+    const spans = loader.spans();
+    const random = createRandom(size);
+    const conflict = await measureConflictCheck(db, spans, random, warmUp, iterations);
+    say(`  conflict check p50 ${conflict.transaction.p50.toFixed(2)} ms, p95 ${conflict.transaction.p95.toFixed(2)} ms (findConflicts p95 ${conflict.findConflicts.p95.toFixed(2)} ms)`);
+    const calendar = await measureCalendarWeek(db, pool, actor, spans, random, warmUp, iterations);
+    say(`  calendar week p50 ${calendar.service.p50.toFixed(2)} ms (raw SQL ${calendar.raw.p50.toFixed(2)} ms), p95 ${calendar.service.p95.toFixed(2)} ms`);
+    const throughput = await measureThroughput(mariadb.url, spans, random, throughputOptions, async () => {
+      const [[row]] = await pool.query<RowDataPacket[]>("SHOW GLOBAL STATUS LIKE 'Questions'");
+      return Number(row!.Value);
+    });
+    say(`  API ${Math.round(throughput.api.reqPerSec)} req/s, bare ${Math.round(throughput.bare.reqPerSec)} req/s (${throughput.ratio.toFixed(2)}×)`);
+    results.push({ bookings: size, loadSeconds, loadAverage: [loadAverage, os.loadavg()[0]!], conflict, calendar, throughput });
+    if (size === sizes.at(-1)) {
+      plans = { bookings: size, plans: await explainBookingReads(pool, spans, random, actor) };
+      say("profiling the API process (a separate, shorter run) …");
+      profile = { bookings: size, ...(await profileApi(mariadb.url, spans, random, path.join(dir, "api-profile"), { ...throughputOptions, seconds: Math.min(5, throughputOptions.seconds) })) };
+    }
+  }
+
+  const run: RunInfo = {
+    date: new Date().toISOString().replace(/\.\d+Z$/, "Z"),
+    machine,
+    iterations,
+    warmUp,
+    throughput: throughputOptions,
+    sizes: results,
+    plans,
+    profile,
+    totalSeconds: (performance.now() - started) / 1000,
+  };
+  const markdown = renderMarkdown(run);
+  process.stdout.write(`\n${markdown}\n\n`);
+  if (writeTheDoc) {
+    writeDoc(path.join(root, "docs/benchmarks.md"), markdown);
+    say("wrote docs/benchmarks.md");
+  }
+}
+
+try {
+  await main();
+} catch (error) {
+  process.exitCode = 1;
+  say(`failed: ${error instanceof Error ? (error.stack ?? error.message) : String(error)}`);
+} finally {
+  await cleanUp();
+}
