@@ -60,8 +60,10 @@ export const bookings = mysqlTable(
     updatedAt: updatedAt(),
   },
   (t) => [
-    // Overlap queries are bounded below by the longest allowed booking, so this index serves them.
-    index("bookings_room_starts").on(t.roomId, t.startsAt),
+    // Overlap queries are bounded below by the longest allowed booking, so this index serves them;
+    // it also covers the occupancy test, so index condition pushdown drops non-overlapping and
+    // non-occupying entries before any (quote-sized) row is read.
+    index("bookings_room_occupancy").on(t.roomId, t.startsAt, t.endsAt, t.status, t.queuedBehindId, t.holdExpiresAt),
     index("bookings_starts").on(t.startsAt),
     index("bookings_client_starts").on(t.clientAccountId, t.startsAt),
     index("bookings_hold_expiry").on(t.status, t.holdExpiresAt),

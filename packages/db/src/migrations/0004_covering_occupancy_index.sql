@@ -1,0 +1,2 @@
+CREATE INDEX `bookings_room_occupancy` ON `bookings` (`room_id`,`starts_at`,`ends_at`,`status`,`queued_behind_id`,`hold_expires_at`);--> statement-breakpoint
+DROP INDEX `bookings_room_starts` ON `bookings`;
