@@ -10,22 +10,24 @@ import { findConflicts, lockResources } from "../../apps/api/src/routes/bookings
 import { studioZone } from "./fixtures.ts";
 import { calendarWeekRows } from "./calendar-sql.ts";
 import type { LoadedSpan } from "./load.ts";
-import type { Random } from "./random.ts";
+import { createRandom, type Random } from "./random.ts";
 
 const minute = 60_000;
 const hour = 60 * minute;
 const day = 24 * hour;
 
-export type Latency = { p50: number; p95: number; n: number; meanRows: number };
+export type Latency = { p50: number; p95: number; n: number; meanRows: number; pageReadsPerCall: number };
+/** A global MariaDB status counter: buffer-pool misses (pages read from disk), or statements received. */
+export type PageReadCounter = () => Promise<number>;
 
 /** Nearest-rank percentile of an ascending list. */
 function percentile(sorted: number[], p: number): number {
   return sorted[Math.min(sorted.length - 1, Math.max(0, Math.ceil((p / 100) * sorted.length) - 1))]!;
 }
 
-function summarise(times: number[], rows: number): Latency {
+function summarise(times: number[], rows: number, pageReads: number): Latency {
   const sorted = [...times].sort((a, b) => a - b);
-  return { p50: percentile(sorted, 50), p95: percentile(sorted, 95), n: times.length, meanRows: rows / times.length };
+  return { p50: percentile(sorted, 50), p95: percentile(sorted, 95), n: times.length, meanRows: rows / times.length, pageReadsPerCall: pageReads / times.length };
 }
 
 /** Runs `warmUp` untimed rounds, then `iterations` timed ones; each round reports its own timings. */
@@ -64,19 +66,21 @@ const conflictInput = (w: Window, now: Date) => ({
   now,
 });
 
-export async function measureConflictCheck(db: Db, spans: LoadedSpan[], random: Random, warmUp: number, iterations: number) {
+export async function measureConflictCheck(db: Db, spans: LoadedSpan[], random: Random, warmUp: number, iterations: number, pageReads: PageReadCounter, statements: PageReadCounter) {
   const whole: number[] = [];
   const query: number[] = [];
   let rows = 0;
+  const before = { taken: false, reads: 0, statements: 0 };
   await repeat(warmUp, iterations, async (timed) => {
+    if (timed && !before.taken) Object.assign(before, { taken: true, reads: await pageReads(), statements: await statements() });
     const w = randomWindow(spans, random);
     const started = performance.now();
     let checked = 0;
     const found = await bookingTx(db, async (tx) => {
       await lockResources(tx, { roomId: w.roomId, engineerIds: [w.engineerId], equipmentIds: [] });
-      const before = performance.now();
+      const checkStarted = performance.now();
       const conflicts = await findConflicts(tx, conflictInput(w, new Date()));
-      checked = performance.now() - before;
+      checked = performance.now() - checkStarted;
       return conflicts.length;
     });
     if (!timed) return;
@@ -84,31 +88,56 @@ export async function measureConflictCheck(db: Db, spans: LoadedSpan[], random: 
     query.push(checked);
     rows += found;
   });
-  return { transaction: summarise(whole, rows), findConflicts: summarise(query, rows) };
+  const reads = (await pageReads()) - before.reads;
+  // Less the two status queries sent after the first count.
+  const sent = (await statements()) - before.statements - 2;
+  return { transaction: summarise(whole, rows, reads), findConflicts: summarise(query, rows, reads), statementsPerCheck: sent / iterations };
 }
 
-export async function measureCalendarWeek(db: Db, pool: Pool, actor: Actor, spans: LoadedSpan[], random: Random, warmUp: number, iterations: number) {
+export async function measureCalendarWeek(db: Db, pool: Pool, actor: Actor, spans: LoadedSpan[], seed: number, warmUp: number, iterations: number, pageReads: PageReadCounter) {
   const service: number[] = [];
   const raw: number[] = [];
   let serviceRows = 0;
   let rawRows = 0;
-  // The same weeks for both, alternating, so neither side gets a warmer cache.
+  let serviceReads = 0;
+  let rawReads = 0;
+  // Alternating calls, but each side on its own random weeks: on the same week the second call
+  // would find the pages the first had just read into the buffer pool.
+  const serviceWeeks = createRandom(seed);
+  const rawWeeks = createRandom(seed + 1);
   await repeat(warmUp, iterations, async (timed) => {
-    const week = randomWeek(spans, random);
+    const a = randomWeek(spans, serviceWeeks);
+    const readsBefore = timed ? await pageReads() : 0;
     let started = performance.now();
-    const list = await listBookings(db, actor, { from: week.from.toISOString(), to: week.to.toISOString(), roomId: week.roomId });
+    const list = await listBookings(db, actor, { from: a.from.toISOString(), to: a.to.toISOString(), roomId: a.roomId });
     const serviceTime = performance.now() - started;
+    const readsBetween = timed ? await pageReads() : 0;
+    const b = randomWeek(spans, rawWeeks);
     started = performance.now();
-    const rows = await calendarWeekRows(pool, week.roomId, week.from, week.to);
+    const rows = await calendarWeekRows(pool, b.roomId, b.from, b.to);
     const rawTime = performance.now() - started;
-    if (rows.bookings.length !== list.length) throw new Error(`raw SQL found ${rows.bookings.length} bookings, listBookings ${list.length}`);
     if (!timed) return;
+    // SHOW STATUS reads no InnoDB pages, so each delta is the call's own.
+    serviceReads += readsBetween - readsBefore;
+    rawReads += (await pageReads()) - readsBetween;
     service.push(serviceTime);
     raw.push(rawTime);
     serviceRows += list.length;
     rawRows += rows.bookings.length;
   });
-  return { service: summarise(service, serviceRows), raw: summarise(raw, rawRows) };
+  return { service: summarise(service, serviceRows, serviceReads), raw: summarise(raw, rawRows, rawReads) };
+}
+
+/** The raw SQL must answer exactly what listBookings answers, or its share means nothing. */
+export async function checkCalendarSqlAgrees(db: Db, pool: Pool, actor: Actor, spans: LoadedSpan[], random: Random, weeks: number) {
+  for (let i = 0; i < weeks; i++) {
+    const w = randomWeek(spans, random);
+    const list = await listBookings(db, actor, { from: w.from.toISOString(), to: w.to.toISOString(), roomId: w.roomId });
+    const rows = await calendarWeekRows(pool, w.roomId, w.from, w.to);
+    const fromService = list.map((b) => b.id).join(",");
+    const fromSql = rows.bookings.map((r) => Number(r.id)).join(",");
+    if (fromService !== fromSql) throw new Error(`raw SQL and listBookings disagree on room ${w.roomId}, week of ${w.from.toISOString()}`);
+  }
 }
 
 export type PlanRow = Record<string, string | number | null>;
