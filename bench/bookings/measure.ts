@@ -141,7 +141,9 @@ export async function checkCalendarSqlAgrees(db: Db, pool: Pool, actor: Actor, s
 }
 
 export type PlanRow = Record<string, string | number | null>;
-export type Plan = { title: string; sql: string; rows: PlanRow[] };
+/** A key the optimiser chose for a table, with its columns in order. */
+export type ChosenKey = { table: string; key: string | null; columns: string[] };
+export type Plan = { title: string; sql: string; rows: PlanRow[]; keys: ChosenKey[] };
 
 /**
  * The plans of the statements the real code sends: a drizzle instance on the same pool with a
@@ -168,10 +170,16 @@ export async function explainBookingReads(pool: Pool, spans: LoadedSpan[], rando
     pick("Conflict check, engineers", (s) => s.startsWith("select") && s.includes("from `booking_engineers` inner join `bookings`")),
     pick("Calendar week (listBookings)", (s) => s.startsWith("select") && s.includes("from `bookings` inner join `rooms`") && s.includes("order by")),
   ];
+  // The schema changes under us (indexes get added), so the doc names each key's columns as found.
+  const [indexes] = await pool.query<RowDataPacket[]>(
+    "SELECT table_name AS t, index_name AS i, GROUP_CONCAT(column_name ORDER BY seq_in_index) AS c FROM information_schema.statistics WHERE table_schema = DATABASE() GROUP BY table_name, index_name",
+  );
+  const columnsOf = new Map(indexes.map((r) => [`${r.t}.${r.i}`, String(r.c).split(",")]));
   const plans: Plan[] = [];
   for (const s of statements) {
     const [rows] = await pool.query<RowDataPacket[]>(`ANALYZE ${s.sql}`, s.params);
-    plans.push({ title: s.title, sql: pool.format(s.sql, s.params), rows: rows.map((r) => ({ ...r }) as PlanRow) });
+    const keys = rows.map((r) => ({ table: String(r.table), key: r.key ? String(r.key) : null, columns: r.key ? (columnsOf.get(`${r.table}.${r.key}`) ?? []) : [] }));
+    plans.push({ title: s.title, sql: pool.format(s.sql, s.params), rows: rows.map((r) => ({ ...r }) as PlanRow), keys });
   }
   return plans;
 }

@@ -57,15 +57,27 @@ function goals(run: RunInfo) {
     const first = run.sizes[0]!;
     const pool = run.machine.server.match(/innodb_buffer_pool_size (\d+) MiB/)?.[1] ?? "?";
     const reads = conflict.pageReadsPerCall;
+    const roomPlan = run.plans?.plans.find((p) => p.title === "Conflict check, room");
+    const chosen = roomPlan?.keys.find((k) => k.table === "bookings");
+    const bookingsRow = roomPlan?.rows.find((r) => r.table === "bookings");
+    // Does the chosen key hold every column the occupancy test reads? Then pushdown can filter in the index.
+    const covering = Boolean(chosen && ["ends_at", "status", "queued_behind_id", "hold_expires_at"].every((c) => chosen.columns.includes(c)));
+    const tableSize = `the table (${Math.round(largest.tableMiB.data)} MiB of rows, ${Math.round(largest.tableMiB.index)} MiB of indexes) is far larger than the ${pool} MiB buffer pool`;
     const cause =
-      reads >= 1
-        ? `What changes is where those rows are: for each index entry InnoDB fetches the whole row (about 1 KiB, most of it the quote JSON) to test \`status\`, \`queued_behind_id\` and \`hold_expires_at\`, and at ${count(largest.bookings)} bookings the table (${Math.round(largest.tableMiB.data)} MiB of rows, ${Math.round(largest.tableMiB.index)} MiB of indexes) is far larger than the ${pool} MiB buffer pool, so a check reads ${reads.toFixed(1)} pages from disk (${first.conflict.transaction.pageReadsPerCall.toFixed(1)} at ${count(first.bookings)}).`
-        : `It reads nothing from disk (${reads.toFixed(1)} pages per check), so the time is the ${largest.conflict.statementsPerCheck.toFixed(0)} statements each check sends (isolation level, begin, two locking reads, two conflict queries, commit) on a host whose cores are shared with the rest of the run.`;
+      reads < 1
+        ? `It reads nothing from disk (${reads.toFixed(1)} pages per check), so the time is the ${largest.conflict.statementsPerCheck.toFixed(0)} statements each check sends (isolation level, begin, two locking reads, two conflict queries, commit) on a host whose cores are shared with the rest of the run.`
+        : covering
+          ? `The key covers the occupancy test, so only matching rows are fetched, but ${tableSize}: a check still reads ${reads.toFixed(1)} pages from disk (${first.conflict.transaction.pageReadsPerCall.toFixed(1)} at ${count(first.bookings)}).`
+          : `What changes is where those rows are: for each index entry InnoDB fetches the whole row (about 1 KiB, most of it the quote JSON) to test \`status\`, \`queued_behind_id\` and \`hold_expires_at\`, and at ${count(largest.bookings)} bookings ${tableSize}, so a check reads ${reads.toFixed(1)} pages from disk (${first.conflict.transaction.pageReadsPerCall.toFixed(1)} at ${count(first.bookings)}).`;
+    const fixes = [
+      ...(reads >= 1 ? [`give MariaDB a buffer pool that holds the bookings table — the ${pool} MiB that \`scripts/lib/mariadb.mjs\` starts with is a development default (\`npm run bench -- --buffer-pool-mb=2048 --no-doc\` shows the effect)`] : []),
+      ...(covering ? [] : ["make the room index cover the occupancy test — `(room_id, starts_at, ends_at, status, queued_behind_id, hold_expires_at)` — so index condition pushdown drops the non-overlapping and non-occupying entries before any row is read, leaving one or two row reads per check whatever the pool size"]),
+      "fewer round trips per check (the isolation level can be set once per pooled connection, and the two locking reads could be one)",
+    ];
     notes.push(
-      `**Why the conflict check misses, and the fix.** The plan is the intended one (below: \`bookings\` → \`bookings_room_occupancy\`, a range over the room's index entries from 14 days before the window to its end, about 30 of them), and it reads as many entries at ${count(first.bookings)} bookings as at ${count(largest.bookings)}. ${cause} Suggested fixes, outside this benchmark: ` +
-        `(1) give MariaDB a buffer pool that holds the bookings table — the ${pool} MiB that \`scripts/lib/mariadb.mjs\` starts with is a development default (\`npm run bench -- --buffer-pool-mb=2048 --no-doc\` shows the effect); ` +
-        "(2) make the room index cover the occupancy test — `(room_id, starts_at, ends_at, status, queued_behind_id, hold_expires_at)` — so index condition pushdown drops the non-overlapping and non-occupying entries before any row is read, leaving one or two row reads per check whatever the pool size; " +
-        "(3) fewer round trips per check (the isolation level can be set once per pooled connection).",
+      `**Why the conflict check misses, and the fix.** The plan is the intended one (below: \`bookings\` → \`${chosen?.key ?? "?"}\` (${chosen?.columns.join(", ") ?? "?"}), a range over the room's entries from 14 days before the window to its end${bookingsRow ? ` — about ${bookingsRow.rows} entries by the optimiser's estimate, ${bookingsRow.r_rows} rows actually read` : ""}), and that range is as long at ${count(first.bookings)} bookings as at ${count(largest.bookings)}. ${cause} Suggested fixes, outside this benchmark: ` +
+        fixes.map((f, i) => `(${i + 1}) ${f}`).join("; ") +
+        ".",
     );
   }
   if (atMillion && !ratioMet) {
@@ -123,7 +135,7 @@ function planSection(plans: NonNullable<RunInfo["plans"]>) {
   const columns = ["table", "type", "possible_keys", "key", "key_len", "ref", "rows", "r_rows", "filtered", "r_filtered", "Extra"];
   const parts = plans.plans.map((p) => {
     const rows = p.rows.map((r) => columns.map((c) => String(r[c] ?? "").replaceAll("|", "\\|")));
-    const keys = p.rows.map((r) => `\`${r.table}\` → \`${r.key ?? "none"}\``).join(", ");
+    const keys = p.keys.map((k) => `\`${k.table}\` → ${k.key ? `\`${k.key}\` (${k.columns.join(", ")})` : "no key"}`).join(", ");
     return `#### ${p.title}\n\nKeys chosen: ${keys}.\n\n${table(columns, rows, true)}\n\n<details><summary>Statement</summary>\n\n\`\`\`sql\n${p.sql}\n\`\`\`\n</details>`;
   });
   return `### Query plans at ${count(plans.bookings)} bookings\n\nMariaDB \`ANALYZE\` of the statements the code sends (captured through a drizzle logger): \`rows\` is the optimiser's estimate, \`r_rows\` what it really read.\n\n${parts.join("\n\n")}`;
