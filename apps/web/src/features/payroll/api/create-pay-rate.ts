@@ -1,0 +1,15 @@
+import { useMutation, useQueryClient } from "@tanstack/react-query";
+import { payRateDto, type CreatePayRateInput } from "@takeup/domain";
+import { api } from "../../../lib/api-client.ts";
+import { payrollKeys } from "./payroll-keys.ts";
+
+export const createPayRate = (input: CreatePayRateInput) => api.post("/api/pay-rates", input, payRateDto);
+
+export function useCreatePayRate() {
+  const queryClient = useQueryClient();
+  return useMutation({
+    mutationFn: createPayRate,
+    // A new rate can put entries that had none into a period's figures.
+    onSuccess: () => queryClient.invalidateQueries({ queryKey: payrollKeys.all }),
+  });
+}

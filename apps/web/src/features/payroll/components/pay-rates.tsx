@@ -1,0 +1,136 @@
+import { useMemo, useState } from "react";
+import { useForm } from "react-hook-form";
+import { zodResolver } from "@hookform/resolvers/zod";
+import { z } from "zod";
+import { createPayRateInput, formatMoney, roleLabels, type PayRateDto, type StaffMemberDto } from "@takeup/domain";
+import { Button } from "../../../components/ui/button.tsx";
+import { DataTable, type ColumnDef } from "../../../components/ui/data-table.tsx";
+import { FormAlert, FormField } from "../../../components/ui/form-field.tsx";
+import { Input } from "../../../components/ui/input.tsx";
+import { Select } from "../../../components/ui/select.tsx";
+import { useToast } from "../../../components/ui/use-toast.ts";
+import { ApiError } from "../../../lib/api-client.ts";
+import { applyApiErrors } from "../../../lib/form-errors.ts";
+import { formatDayLong, formatDayShort, studioToday } from "../../../lib/studio-time.ts";
+import { toMinorUnits } from "../../../lib/units.ts";
+import { useCreatePayRate } from "../api/create-pay-rate.ts";
+
+/** Every rate with the date it applies from; a newer row for the same person and code takes over on its date. */
+export function PayRatesTable({ rates, currency }: { rates: PayRateDto[]; currency: string }) {
+  const columns = useMemo<ColumnDef<PayRateDto>[]>(
+    () => [
+      { id: "person", header: "Person", accessorFn: (r) => r.staffName, cell: ({ row }) => <span className="font-medium">{row.original.staffName}</span> },
+      { id: "code", header: "Code", accessorFn: (r) => r.code },
+      { id: "rate", header: "Rate per hour", accessorFn: (r) => r.hourlyRateCents, cell: ({ row }) => formatMoney(row.original.hourlyRateCents, currency) },
+      {
+        id: "from",
+        header: "From",
+        accessorFn: (r) => r.effectiveFrom,
+        cell: ({ row }) => `${formatDayShort(row.original.effectiveFrom)} ${row.original.effectiveFrom.slice(0, 4)}`,
+      },
+    ],
+    [currency],
+  );
+  return (
+    <DataTable
+      label="Pay rates"
+      filterLabel="Filter pay rates"
+      data={rates}
+      columns={columns}
+      getRowId={(r) => String(r.id)}
+      initialSorting={[{ id: "person", desc: false }]}
+      emptyMessage="No pay rates yet. Time is only paid once a rate is set."
+    />
+  );
+}
+
+const codeSuggestions = ["engineer", "assistant", "shop"];
+
+function payRateForm(currency: string) {
+  return z.object({
+    staffUserId: z.string().min(1, "Choose a person"),
+    code: createPayRateInput.shape.code,
+    rate: z
+      .string()
+      .trim()
+      .min(1, "Enter the rate per hour")
+      .refine((value) => toMinorUnits(value, currency) !== null, "Enter an amount such as 28.50")
+      .refine((value) => (toMinorUnits(value, currency) ?? 0) <= 1_000_000, "That is more than Takeup can store for an hour"),
+    effectiveFrom: z.iso.date("Choose the first day the rate applies"),
+  });
+}
+type PayRateValues = z.infer<ReturnType<typeof payRateForm>>;
+
+/** The API names the cents field; the form shows it as an amount. */
+function inFormTerms(error: unknown): unknown {
+  if (!(error instanceof ApiError)) return error;
+  return new ApiError(error.status, error.code, error.message, error.details.map((d) => ({ ...d, field: d.field === "hourlyRateCents" ? "rate" : d.field })));
+}
+
+type PayRateFormProps = { members: StaffMemberDto[]; currency: string; timeZone: string };
+
+/** The owner sets a rate for a person and a kind of work, from a date. */
+export function PayRateForm({ members, currency, timeZone }: PayRateFormProps) {
+  const toast = useToast();
+  const [formError, setFormError] = useState<string | null>(null);
+  const schema = useMemo(() => payRateForm(currency), [currency]);
+  const defaultValues = { staffUserId: "", code: "engineer", rate: "", effectiveFrom: studioToday(timeZone) };
+  const { register, handleSubmit, setError, reset, formState } = useForm<PayRateValues>({ resolver: zodResolver(schema), defaultValues });
+  const create = useCreatePayRate();
+  const people = members.filter((m) => m.active).sort((a, b) => a.name.localeCompare(b.name));
+
+  const onSubmit = handleSubmit((values) => {
+    setFormError(null);
+    create.mutate(
+      { staffUserId: values.staffUserId, code: values.code.trim(), hourlyRateCents: toMinorUnits(values.rate, currency) ?? 0, effectiveFrom: values.effectiveFrom },
+      {
+        onSuccess: (rate) => {
+          toast(`${rate.staffName}: ${rate.code} at ${formatMoney(rate.hourlyRateCents, currency)} an hour from ${formatDayLong(rate.effectiveFrom)}`);
+          reset(defaultValues);
+        },
+        onError: (error) =>
+          setFormError(applyApiErrors(inFormTerms(error), setError, { fields: ["staffUserId", "code", "rate", "effectiveFrom"], codeFields: { not_found: "staffUserId" } })),
+      },
+    );
+  });
+
+  const { errors } = formState;
+  return (
+    <form onSubmit={onSubmit} noValidate className="flex flex-col gap-4">
+      <FormAlert message={formError} />
+      <div className="grid gap-4 sm:grid-cols-2 lg:grid-cols-4">
+        <FormField label="Person" error={errors.staffUserId?.message}>
+          {(field) => (
+            <Select {...field} {...register("staffUserId")}>
+              <option value="">Choose…</option>
+              {people.map((m) => (
+                <option key={m.userId} value={m.userId}>
+                  {m.name} ({roleLabels[m.role]})
+                </option>
+              ))}
+            </Select>
+          )}
+        </FormField>
+        <FormField label="Code" hint="engineer, assistant, shop, or your own" error={errors.code?.message}>
+          {(field) => <Input {...field} {...register("code")} list="pay-rate-codes" autoCapitalize="none" spellCheck={false} />}
+        </FormField>
+        <datalist id="pay-rate-codes">
+          {codeSuggestions.map((code) => (
+            <option key={code} value={code} />
+          ))}
+        </datalist>
+        <FormField label="Rate per hour" hint={`In ${currency}, e.g. 28.50`} error={errors.rate?.message}>
+          {(field) => <Input {...field} {...register("rate")} inputMode="decimal" autoComplete="off" />}
+        </FormField>
+        <FormField label="From" hint="The first studio day it applies" error={errors.effectiveFrom?.message}>
+          {(field) => <Input {...field} {...register("effectiveFrom")} type="date" />}
+        </FormField>
+      </div>
+      <div>
+        <Button type="submit" pending={create.isPending}>
+          Add pay rate
+        </Button>
+      </div>
+    </form>
+  );
+}

@@ -1,0 +1,16 @@
+import { useMutation, useQueryClient } from "@tanstack/react-query";
+import { timeEntryDto } from "@takeup/domain";
+import { api } from "../../../lib/api-client.ts";
+import { refreshClock, settleClock } from "./settle-clock.ts";
+
+/** Closes the open entry (and any break still running). 409 not_clocked_in. */
+export const clockOut = () => api.post("/api/time-clock/clock-out", {}, timeEntryDto);
+
+export function useClockOut() {
+  const queryClient = useQueryClient();
+  return useMutation({
+    mutationFn: clockOut,
+    onSuccess: () => settleClock(queryClient, null),
+    onError: () => refreshClock(queryClient),
+  });
+}

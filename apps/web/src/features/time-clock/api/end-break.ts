@@ -1,0 +1,16 @@
+import { useMutation, useQueryClient } from "@tanstack/react-query";
+import { timeEntryDto } from "@takeup/domain";
+import { api } from "../../../lib/api-client.ts";
+import { refreshClock, settleClock } from "./settle-clock.ts";
+
+/** Back to work. 409 not_on_break. */
+export const endBreak = () => api.post("/api/time-clock/break-end", {}, timeEntryDto);
+
+export function useEndBreak() {
+  const queryClient = useQueryClient();
+  return useMutation({
+    mutationFn: endBreak,
+    onSuccess: (entry) => settleClock(queryClient, entry),
+    onError: () => refreshClock(queryClient),
+  });
+}
