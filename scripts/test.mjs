@@ -9,6 +9,8 @@ import { buildWeb, dbTask, startApi, startMailCatcher } from "./lib/stack.mjs";
 import { startMariaDb } from "./lib/mariadb.mjs";
 
 const only = process.argv.find((a) => a.startsWith("--only="))?.slice("--only=".length);
+// Anything else on the command line narrows the run to matching test files (vitest filters).
+const fileFilters = process.argv.slice(2).filter((a) => !a.startsWith("--"));
 const port = Number(process.env.TAKEUP_TEST_PORT ?? 3100);
 const dbPort = Number(process.env.TAKEUP_TEST_DB_PORT ?? 3308);
 const smtpPort = Number(process.env.TAKEUP_TEST_SMTP_PORT ?? 2525);
@@ -62,7 +64,7 @@ try {
   step(
     "tests",
     bin("vitest"),
-    ["run", "--reporter=default", "--reporter=json", `--outputFile.json=${results}`, ...(only ? ["--project", only] : [])],
+    ["run", "--reporter=default", "--reporter=json", `--outputFile.json=${results}`, ...(only ? ["--project", only] : []), ...fileFilters],
     {
       TEST_DATABASE_URL: database.url,
       E2E_BASE_URL: appUrl,

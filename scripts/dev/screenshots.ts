@@ -7,10 +7,10 @@ const baseUrl = process.argv[2] ?? "http://localhost:3000";
 const outDir = process.argv[3] ?? ".tmp/screenshots";
 const password = "studio-demo-2026";
 const shots: { role: string; email: string; paths: string[] }[] = [
-  { role: "owner", email: "owner@wrenfield.test", paths: ["/", "/team", "/clients", "/settings", "/activity", "/dev/mail"] },
-  { role: "manager", email: "manager@wrenfield.test", paths: ["/", "/clients"] },
-  { role: "engineer", email: "priya@wrenfield.test", paths: ["/"] },
-  { role: "bookkeeper", email: "books@wrenfield.test", paths: ["/"] },
+  { role: "owner", email: "owner@wrenfield.test", paths: ["/", "/team", "/clients", "/settings", "/activity", "/dev/mail", "/pay-rates", "/payroll-settings", "/clock"] },
+  { role: "manager", email: "manager@wrenfield.test", paths: ["/", "/clients", "/approvals"] },
+  { role: "engineer", email: "priya@wrenfield.test", paths: ["/", "/timesheet"] },
+  { role: "bookkeeper", email: "books@wrenfield.test", paths: ["/", "/pay-periods"] },
   { role: "client", email: "band@lanternstatic.test", paths: ["/", "/team"] },
 ];
 const extraPaths = (process.env.SHOT_PATHS ?? "").split(",").filter(Boolean);

@@ -11,7 +11,7 @@ export const phone = { width: 390, height: 844 };
 export const desktop = { width: 1280, height: 800 };
 
 // Chromium logs every 4xx fetch as a console error; the journeys provoke those on purpose.
-const expectedNoise = /Failed to load resource: the server responded with a status of (401|403|404|409|429)/;
+const expectedNoise = /Failed to load resource: the server responded with a status of (401|403|404|409|423|429)/;
 
 let browser: Browser;
 const problems: string[] = [];

@@ -1,4 +1,5 @@
-import { useState } from "react";
+import { useState, type ReactNode } from "react";
+import type { Role } from "@takeup/domain";
 import { createBrowserRouter, RouterProvider, type RouteObject } from "react-router";
 import { areaRoles } from "../config/access.ts";
 import { paths } from "../config/paths.ts";
@@ -20,8 +21,20 @@ import { RoomsRoute } from "./routes/rooms/rooms.tsx";
 import { RouteError } from "./routes/route-error.tsx";
 import { MySessionsRoute } from "./routes/sessions/my-sessions.tsx";
 import { SessionsRoute } from "./routes/sessions/sessions.tsx";
+import { PayPeriodPage } from "./routes/payroll/pay-period.tsx";
+import { PayPeriodsPage } from "./routes/payroll/pay-periods.tsx";
+import { PayRatesPage } from "./routes/payroll/pay-rates.tsx";
+import { PayrollSettingsPage } from "./routes/payroll/payroll-settings.tsx";
+import { ApprovalsPage } from "./routes/time/approvals.tsx";
+import { ClockPage } from "./routes/time/clock.tsx";
+import { MyTimesheetPage } from "./routes/time/my-timesheet.tsx";
 import { SettingsRoute } from "./routes/settings/settings.tsx";
 import { TeamRoute } from "./routes/team/team.tsx";
+
+/** A screen only the given roles may open; everyone else gets "Not allowed here". */
+function guarded(path: string, roles: readonly Role[], element: ReactNode): RouteObject {
+  return { path, element: <RequireRole roles={roles}>{element}</RequireRole> };
+}
 
 export const routes: RouteObject[] = [
   {
@@ -36,94 +49,24 @@ export const routes: RouteObject[] = [
         element: <AppRoot />,
         children: [
           { index: true, element: <HomeRoute /> },
-          {
-            path: paths.clients.list.path,
-            element: (
-              <RequireRole roles={areaRoles.clients}>
-                <ClientsRoute />
-              </RequireRole>
-            ),
-          },
-          {
-            path: paths.clients.detail.path,
-            element: (
-              <RequireRole roles={areaRoles.clients}>
-                <ClientRoute />
-              </RequireRole>
-            ),
-          },
-          {
-            path: paths.calendar.path,
-            element: (
-              <RequireRole roles={areaRoles.calendar}>
-                <CalendarRoute />
-              </RequireRole>
-            ),
-          },
-          {
-            path: paths.bookings.path,
-            element: (
-              <RequireRole roles={areaRoles.bookings}>
-                <BookingsRoute />
-              </RequireRole>
-            ),
-          },
-          {
-            path: paths.rooms.path,
-            element: (
-              <RequireRole roles={areaRoles.rooms}>
-                <RoomsRoute />
-              </RequireRole>
-            ),
-          },
-          {
-            path: paths.mySessions.path,
-            element: (
-              <RequireRole roles={areaRoles.mySessions}>
-                <MySessionsRoute />
-              </RequireRole>
-            ),
-          },
-          {
-            path: paths.sessions.path,
-            element: (
-              <RequireRole roles={areaRoles.sessions}>
-                <SessionsRoute />
-              </RequireRole>
-            ),
-          },
-          {
-            path: paths.team.path,
-            element: (
-              <RequireRole roles={areaRoles.team}>
-                <TeamRoute />
-              </RequireRole>
-            ),
-          },
-          {
-            path: paths.settings.path,
-            element: (
-              <RequireRole roles={areaRoles.settings}>
-                <SettingsRoute />
-              </RequireRole>
-            ),
-          },
-          {
-            path: paths.activity.path,
-            element: (
-              <RequireRole roles={areaRoles.activity}>
-                <ActivityRoute />
-              </RequireRole>
-            ),
-          },
-          {
-            path: paths.devMail.path,
-            element: (
-              <RequireRole roles={areaRoles.devMail}>
-                <DevMailRoute />
-              </RequireRole>
-            ),
-          },
+          guarded(paths.clients.list.path, areaRoles.clients, <ClientsRoute />),
+          guarded(paths.clients.detail.path, areaRoles.clients, <ClientRoute />),
+          guarded(paths.calendar.path, areaRoles.calendar, <CalendarRoute />),
+          guarded(paths.bookings.path, areaRoles.bookings, <BookingsRoute />),
+          guarded(paths.rooms.path, areaRoles.rooms, <RoomsRoute />),
+          guarded(paths.mySessions.path, areaRoles.mySessions, <MySessionsRoute />),
+          guarded(paths.sessions.path, areaRoles.sessions, <SessionsRoute />),
+          guarded(paths.clock.path, areaRoles.clock, <ClockPage />),
+          guarded(paths.myTimesheet.path, areaRoles.myTimesheet, <MyTimesheetPage />),
+          guarded(paths.approvals.path, areaRoles.approvals, <ApprovalsPage />),
+          guarded(paths.payPeriods.list.path, areaRoles.payPeriods, <PayPeriodsPage />),
+          guarded(paths.payPeriods.detail.path, areaRoles.payPeriods, <PayPeriodPage />),
+          guarded(paths.payRates.path, areaRoles.payRates, <PayRatesPage />),
+          guarded(paths.payrollSettings.path, areaRoles.payrollSettings, <PayrollSettingsPage />),
+          guarded(paths.team.path, areaRoles.team, <TeamRoute />),
+          guarded(paths.settings.path, areaRoles.settings, <SettingsRoute />),
+          guarded(paths.activity.path, areaRoles.activity, <ActivityRoute />),
+          guarded(paths.devMail.path, areaRoles.devMail, <DevMailRoute />),
           { path: "*", element: <NotFoundRoute /> },
         ],
       },

@@ -13,6 +13,13 @@ export const areaRoles = {
   settings: ["owner"],
   activity: ["owner"],
   devMail: ["owner"],
+  // Engineers have the clock on their home page; owner and manager clock in at /clock.
+  clock: ["owner", "manager", "engineer"],
+  myTimesheet: ["owner", "manager", "engineer"],
+  approvals: ["owner", "manager"],
+  payPeriods: ["owner", "manager", "bookkeeper"],
+  payRates: ["owner", "bookkeeper"],
+  payrollSettings: ["owner", "manager", "bookkeeper"],
 } as const satisfies Record<string, readonly Role[]>;
 
 const clientEditors: readonly Role[] = ["owner", "manager"];
@@ -38,3 +45,14 @@ export const canSeeEquipment = (role: Role) => role === "owner" || role === "man
 export const canManageRoomFeeds = (role: Role) => bookers.includes(role);
 
 export const isAllowed = (role: Role, allowed: readonly Role[]) => allowed.includes(role);
+
+// Time and payroll actions: nobody is offered a button that answers 403.
+
+/** Who decides corrections (the API's own check on approve and reject). */
+export const canDecideCorrections = (role: Role) => role === "owner" || role === "manager";
+export const canApprovePeriods = (role: Role) => role === "owner" || role === "manager" || role === "bookkeeper";
+export const canLockPeriods = (role: Role) => role === "owner" || role === "bookkeeper";
+export const canUnlockPeriods = (role: Role) => role === "owner";
+export const canExportPayroll = (role: Role) => role === "owner" || role === "bookkeeper";
+export const canEditPayRates = (role: Role) => role === "owner";
+export const canEditPayrollSettings = (role: Role) => role === "owner";

@@ -36,6 +36,19 @@ export const paths = {
   settings: { path: "/settings", getHref: () => "/settings" },
   activity: { path: "/activity", getHref: () => "/activity" },
   devMail: { path: "/dev/mail", getHref: () => "/dev/mail" },
+  clock: { path: "/clock", getHref: () => "/clock" },
+  myTimesheet: {
+    path: "/timesheet",
+    /** `week` is the first studio workday of the week shown (YYYY-MM-DD). */
+    getHref: (week?: string) => (week ? `/timesheet?week=${week}` : "/timesheet"),
+  },
+  approvals: { path: "/approvals", getHref: () => "/approvals" },
+  payPeriods: {
+    list: { path: "/pay-periods", getHref: () => "/pay-periods" },
+    detail: { path: "/pay-periods/:periodId", getHref: (id: number) => `/pay-periods/${id}` },
+  },
+  payRates: { path: "/pay-rates", getHref: () => "/pay-rates" },
+  payrollSettings: { path: "/payroll-settings", getHref: () => "/payroll-settings" },
 } as const;
 
 /**

@@ -86,14 +86,16 @@ describe("locking and exports", () => {
     const locked = await books.post(`/api/pay-periods/${periodId}/lock`);
     expect(locked.body).toMatchObject({ status: "locked", lockedByName: "Lena Marsh" });
     const jo = await t.signIn("jo@wrenfield.test");
-    const late = await jo.post("/api/time-entry-edits").send({ startedAt: monday.plus({ days: 6, hours: 10 }).toISO(), endedAt: monday.plus({ days: 6, hours: 12 }).toISO(), reason: "One more shift" });
-    const refused = await manager.post(`/api/time-entry-edits/${late.body.id}/approve`).send({});
+    const shift = { startedAt: monday.plus({ days: 6, hours: 10 }).toISO(), endedAt: monday.plus({ days: 6, hours: 12 }).toISO(), reason: "One more shift" };
+    const refused = await jo.post("/api/time-entry-edits").send(shift);
     expect(refused.status).toBe(423);
     expect(refused.body.error).toMatchObject({ code: "period_locked", message: expect.stringContaining("only the owner can unlock it") });
     expect((await books.post(`/api/pay-periods/${periodId}/unlock`).send({ reason: "Missing shift" })).status).toBe(403);
     expect((await owner.post(`/api/pay-periods/${periodId}/unlock`).send({})).status).toBe(400);
     const unlocked = await owner.post(`/api/pay-periods/${periodId}/unlock`).send({ reason: "A shift was missing" });
     expect(unlocked.body.status).toBe("open");
+    const late = await jo.post("/api/time-entry-edits").send(shift);
+    expect(late.status).toBe(201);
     await manager.post(`/api/time-entry-edits/${late.body.id}/reject`).send({ note: "Not worked" });
     await books.post(`/api/pay-periods/${periodId}/approve`);
     await books.post(`/api/pay-periods/${periodId}/lock`);

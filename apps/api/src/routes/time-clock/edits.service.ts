@@ -60,14 +60,20 @@ export const listEdits = (db: Db, actor: Actor, status?: "pending" | "approved" 
 export async function proposeEdit(db: Db, actor: Actor, input: ProposeEditInput): Promise<TimeEntryEditDto> {
   const proposed: ProposedEntry = { startedAt: input.startedAt, endedAt: input.endedAt, breaks: input.breaks ?? [], bookingId: input.bookingId ?? null };
   checkShape(proposed);
+  const payroll = await loadPayroll(db);
   const id = await db.transaction(async (tx) => {
+    const touched = [new Date(proposed.startedAt), new Date(proposed.endedAt)];
     if (input.timeEntryId) {
       const [entry] = await tx.select().from(timeEntries).where(eq(timeEntries.id, input.timeEntryId));
       if (!entry || (actor.role === "engineer" && entry.staffUserId !== actor.userId)) throw notFound("That time entry");
       if (!entry.endedAt) throw conflict("entry_open", "Clock out before correcting this entry");
       const [pending] = await tx.select().from(timeEntryEdits).where(and(eq(timeEntryEdits.timeEntryId, entry.id), eq(timeEntryEdits.status, "pending")));
       if (pending) throw conflict("edit_pending", "A correction to this entry is already waiting for a decision");
+      touched.push(entry.startedAt, entry.endedAt);
     }
+    // Refused now rather than at approval: a correction nobody may approve would only wait forever
+    // and keep the period from being closed again after an unlock.
+    await assertPeriodsOpen(tx, payroll, touched);
     const [created] = await tx.insert(timeEntryEdits).values({ timeEntryId: input.timeEntryId ?? null, staffUserId: actor.userId, proposed, reason: input.reason }).$returningId();
     await writeAudit(tx, actor, "time_edit.proposed", { type: "time_entry_edit", id: created!.id }, { after: { timeEntryId: input.timeEntryId ?? null, proposed, reason: input.reason } });
     return created!.id;

@@ -22,6 +22,12 @@ describe("SideNav", () => {
       "Bookings",
       "Clients",
       "Rooms and rates",
+      "Time clock",
+      "My timesheet",
+      "Corrections",
+      "Pay periods",
+      "Pay rates",
+      "Payroll settings",
       "Team",
       "Studio settings",
       "Activity",
@@ -31,12 +37,24 @@ describe("SideNav", () => {
 
   it("gives the manager the calendar, bookings and rooms but not the owner's areas", () => {
     const nav = renderNav("manager");
-    expect(labels(nav)).toEqual(["Today", "Calendar", "Bookings", "Clients", "Rooms and rates"]);
+    expect(labels(nav)).toEqual([
+      "Today",
+      "Calendar",
+      "Bookings",
+      "Clients",
+      "Rooms and rates",
+      "Time clock",
+      "My timesheet",
+      "Corrections",
+      "Pay periods",
+      "Payroll settings",
+    ]);
+    expect(nav.queryByRole("link", { name: "Pay rates" })).not.toBeInTheDocument();
     expect(nav.queryByRole("link", { name: "Team" })).not.toBeInTheDocument();
   });
 
-  it("gives an engineer their day and their sessions, and nothing about clients or money", () => {
-    expect(labels(renderNav("engineer"))).toEqual(["My day", "My sessions"]);
+  it("gives an engineer their day, their sessions and their timesheet, and nothing about clients or money", () => {
+    expect(labels(renderNav("engineer"))).toEqual(["My day", "My sessions", "My timesheet"]);
   });
 
   it("shows a client only its own account and sessions, and no Team or Clients", () => {
@@ -46,8 +64,8 @@ describe("SideNav", () => {
     expect(nav.queryByRole("link", { name: "Clients" })).not.toBeInTheDocument();
   });
 
-  it("gives the bookkeeper an overview, the bookings and the clients list", () => {
-    expect(labels(renderNav("bookkeeper"))).toEqual(["Overview", "Bookings", "Clients"]);
+  it("gives the bookkeeper the pay periods first, then the bookings and the clients list", () => {
+    expect(labels(renderNav("bookkeeper"))).toEqual(["Overview", "Pay periods", "Pay rates", "Payroll settings", "Bookings", "Clients"]);
   });
 
   it("marks the page you are on, and not home as well", () => {

@@ -8,8 +8,13 @@ export function SideNav({ items, onNavigate }: SideNavProps) {
   return (
     <nav aria-label="Main">
       <ul className="flex flex-col gap-0.5">
-        {items.map((item) => (
+        {items.map((item, index) => (
           <li key={item.href}>
+            {item.group && item.group !== items[index - 1]?.group ? (
+              <p aria-hidden="true" className="mt-4 mb-1 px-3 text-xs font-semibold tracking-wide text-muted uppercase">
+                {item.group}
+              </p>
+            ) : null}
             <NavLink
               to={item.href}
               // Home is "/", which every path starts with; only an exact match marks it current.

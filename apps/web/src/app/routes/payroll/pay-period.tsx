@@ -6,7 +6,7 @@ import { usePayPeriod } from "../../../features/payroll/api/get-pay-period.ts";
 import { PayPeriodReview } from "../../../features/payroll/components/pay-period-review.tsx";
 import { PayrollCaution } from "../../../features/payroll/components/payroll-caution.tsx";
 import { formatPeriod } from "../../../features/payroll/components/period-format.ts";
-import { payrollPaths } from "../../../features/payroll/payroll-paths.ts";
+import { paths } from "../../../config/paths.ts";
 import { useStudio } from "../../../features/studio/api/get-studio.ts";
 import { ApiError } from "../../../lib/api-client.ts";
 import { NotFoundRoute } from "../not-found.tsx";
@@ -35,7 +35,7 @@ function PayPeriodView({ review }: { review: PayPeriodReviewDto }) {
   return (
     <>
       <p className="mb-2 text-sm">
-        <Link to={payrollPaths.payPeriods.list.getHref()} className="font-medium text-muted underline-offset-2 hover:text-ink hover:underline">
+        <Link to={paths.payPeriods.list.getHref()} className="font-medium text-muted underline-offset-2 hover:text-ink hover:underline">
           ← All pay periods
         </Link>
       </p>

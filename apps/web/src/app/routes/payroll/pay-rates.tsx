@@ -4,7 +4,7 @@ import { ErrorState, LoadingState } from "../../../components/ui/states.tsx";
 import { usePayRates } from "../../../features/payroll/api/get-pay-rates.ts";
 import { PayRateForm, PayRatesTable } from "../../../features/payroll/components/pay-rates.tsx";
 import { PayrollCaution } from "../../../features/payroll/components/payroll-caution.tsx";
-import { canEditPayRates } from "../../../features/payroll/payroll-access.ts";
+import { canEditPayRates } from "../../../config/access.ts";
 import { useStaff } from "../../../features/staff/api/get-staff.ts";
 import { useStudio } from "../../../features/studio/api/get-studio.ts";
 import { useSignedInUser } from "../../use-signed-in-user.ts";

@@ -3,7 +3,7 @@ import { ErrorState, LoadingState } from "../../../components/ui/states.tsx";
 import { usePayrollSettings } from "../../../features/payroll/api/get-payroll-settings.ts";
 import { PayrollCaution } from "../../../features/payroll/components/payroll-caution.tsx";
 import { PayrollSettingsForm } from "../../../features/payroll/components/payroll-settings-form.tsx";
-import { canEditPayrollSettings } from "../../../features/payroll/payroll-access.ts";
+import { canEditPayrollSettings } from "../../../config/access.ts";
 import { useSignedInUser } from "../../use-signed-in-user.ts";
 
 export function PayrollSettingsPage() {

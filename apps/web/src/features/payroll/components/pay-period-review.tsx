@@ -5,7 +5,7 @@ import { cx } from "../../../lib/cx.ts";
 import { formatDayShort } from "../../../lib/studio-time.ts";
 import { flagLabels } from "../../time-clock/components/entry-flags.tsx";
 import { inStudioTime } from "../../time-clock/components/studio-message.ts";
-import { canExportPayroll } from "../payroll-access.ts";
+import { canExportPayroll } from "../../../config/access.ts";
 import { ExportDownloads } from "./export-downloads.tsx";
 import { formatDecimalHours } from "./hours.ts";
 import { PeriodActions } from "./period-actions.tsx";

@@ -3,7 +3,7 @@ import { Link, useNavigate } from "react-router";
 import type { PayPeriodDto } from "@takeup/domain";
 import { DataTable, type ColumnDef } from "../../../components/ui/data-table.tsx";
 import { formatStudioDayTime } from "../../../lib/studio-time.ts";
-import { payrollPaths } from "../payroll-paths.ts";
+import { paths } from "../../../config/paths.ts";
 import { formatPeriod, payPeriodKindLabels } from "./period-format.ts";
 import { PeriodStatusBadge, periodStatusLabels } from "./period-status.tsx";
 
@@ -29,7 +29,7 @@ export function PayPeriodsTable({ periods, timeZone }: PayPeriodsTableProps) {
         header: "Period",
         accessorFn: (p) => p.startDate,
         cell: ({ row }) => (
-          <Link to={payrollPaths.payPeriods.detail.getHref(row.original.id)} className="font-semibold text-rust-deep underline-offset-2 hover:underline">
+          <Link to={paths.payPeriods.detail.getHref(row.original.id)} className="font-semibold text-rust-deep underline-offset-2 hover:underline">
             {formatPeriod(row.original.startDate, row.original.endDate)}
           </Link>
         ),
@@ -64,7 +64,7 @@ export function PayPeriodsTable({ periods, timeZone }: PayPeriodsTableProps) {
       getRowId={(p) => String(p.id)}
       emptyMessage="No pay periods yet."
       hideFilter
-      onRowClick={(p) => void navigate(payrollPaths.payPeriods.detail.getHref(p.id))}
+      onRowClick={(p) => void navigate(paths.payPeriods.detail.getHref(p.id))}
     />
   );
 }

@@ -14,7 +14,7 @@ import { useApprovePayPeriod } from "../api/approve-pay-period.ts";
 import { useLockPayPeriod } from "../api/lock-pay-period.ts";
 import { useReopenPayPeriod } from "../api/reopen-pay-period.ts";
 import { useUnlockPayPeriod } from "../api/unlock-pay-period.ts";
-import { canApprovePeriods, canLockPeriods, canUnlockPeriods } from "../payroll-access.ts";
+import { canApprovePeriods, canLockPeriods, canUnlockPeriods } from "../../../config/access.ts";
 
 type PeriodActionsProps = { period: PayPeriodDto; role: Role; label: string };
 
