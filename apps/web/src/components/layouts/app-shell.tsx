@@ -27,10 +27,10 @@ export function AppShell({ studioName, person, items, onSignOut, signingOut, chi
   }, [menuOpen]);
 
   const account = (
-    <div className="border-t border-line pt-4">
+    <div className="border-t border-line pt-3">
       <p className="truncate font-semibold">{person.name}</p>
       <p className="text-sm text-muted">{person.roleLabel}</p>
-      <Button variant="secondary" size="sm" className="mt-3 w-full" onClick={onSignOut} pending={signingOut}>
+      <Button variant="secondary" size="sm" className="mt-2 w-full" onClick={onSignOut} pending={signingOut}>
         Sign out
       </Button>
     </div>
@@ -45,9 +45,9 @@ export function AppShell({ studioName, person, items, onSignOut, signingOut, chi
         Skip to content
       </a>
 
-      <aside className="hidden w-60 shrink-0 flex-col border-r border-line bg-paper-deep/50 px-3 py-5 md:sticky md:top-0 md:flex md:h-dvh">
+      <aside className="hidden w-60 shrink-0 flex-col border-r border-line bg-paper-deep/50 px-3 py-4 md:sticky md:top-0 md:flex md:h-dvh">
         <StudioName name={studioName} />
-        <div className="mt-6 flex-1 overflow-y-auto">
+        <div className="mt-4 mb-2 flex-1 overflow-y-auto">
           <SideNav items={items} />
         </div>
         {account}

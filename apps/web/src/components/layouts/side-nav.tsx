@@ -11,7 +11,7 @@ export function SideNav({ items, onNavigate }: SideNavProps) {
         {items.map((item, index) => (
           <li key={item.href}>
             {item.group && item.group !== items[index - 1]?.group ? (
-              <p aria-hidden="true" className="mt-4 mb-1 px-3 text-xs font-semibold tracking-wide text-muted uppercase">
+              <p aria-hidden="true" className="mt-3 mb-1 px-3 text-xs font-semibold tracking-wide text-muted uppercase">
                 {item.group}
               </p>
             ) : null}
@@ -22,7 +22,7 @@ export function SideNav({ items, onNavigate }: SideNavProps) {
               onClick={onNavigate}
               className={({ isActive }) =>
                 cx(
-                  "flex items-center rounded-md border-l-[3px] px-3 py-2 text-[0.9375rem] font-medium transition-colors",
+                  "flex items-center rounded-md border-l-[3px] px-3 py-1.5 text-[0.9375rem] font-medium transition-colors",
                   isActive
                     ? "border-rust bg-rust-wash text-rust-deep"
                     : "border-transparent text-ink hover:bg-paper-deep",
