@@ -33,6 +33,7 @@ export type {
 // Payroll: punch rounding, overtime, pay periods, ISO weeks.
 export { computeOvertime } from "./payroll/compute-overtime.ts";
 export { roundPunch } from "./payroll/round-punch.ts";
+export { clockedMinutesByWorkday } from "./payroll/split-entries.ts";
 export { payPeriodContaining, payPeriodForWorkday, type PayPeriod, type PayPeriodSchedule } from "./payroll/pay-periods.ts";
 export { summarisePayPeriod, type PayPeriodSummary, type PayPeriodStaffTotals } from "./payroll/pay-period-summary.ts";
 export { formatIsoWeek, isoWeek, type IsoWeekDate } from "./payroll/iso-week.ts";

@@ -1,7 +1,7 @@
 import type { RateLookup } from "./pay-rates.ts";
 import { roundPunch, roundToMinute } from "./round-punch.ts";
 import { addDays, workdayOf, workdayStart } from "./studio-calendar.ts";
-import type { EntryTrace, PayrollSettings, TimeEntry, TimeInterval } from "./types.ts";
+import type { EntryTrace, PayrollSettings, StudioCalendar, TimeEntry, TimeInterval } from "./types.ts";
 
 const minuteMs = 60_000;
 
@@ -125,4 +125,15 @@ export function splitEntry(entry: TimeEntry, settings: PayrollSettings, rateOf: 
     },
     pieces,
   };
+}
+
+/**
+ * Clocked minutes per workday as punched (no rounding, breaks removed), for the clock's
+ * "week so far": a shift past midnight counts on each day it touched, as payroll splits it.
+ */
+export function clockedMinutesByWorkday(entry: TimeEntry, calendar: StudioCalendar): Map<string, number> {
+  const settings: PayrollSettings = { ...calendar, punchRounding: "none", overtimeRules: "federal_weekly" };
+  const byDay = new Map<string, number>();
+  for (const piece of splitEntry(entry, settings, () => 0).pieces) byDay.set(piece.workday, (byDay.get(piece.workday) ?? 0) + piece.minutes);
+  return byDay;
 }

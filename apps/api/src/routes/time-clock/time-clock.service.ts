@@ -1,6 +1,6 @@
 import { and, asc, desc, eq, gt, gte, inArray, isNull, lt, lte, or } from "drizzle-orm";
 import { bookingEngineers, bookings, clientAccounts, rooms, staffProfiles, timeEntries, timeEntryBreaks, type Db, type Tx } from "@takeup/db";
-import { workdayOf, workdayStart, workweekContaining, addCalendarDays, type TimeClockDto, type TimeEntryDto } from "@takeup/domain";
+import { clockedMinutesByWorkday, workdayStart, workweekContaining, addCalendarDays, type TimeClockDto, type TimeEntryDto } from "@takeup/domain";
 import { conflict, HttpError, notFound } from "../../lib/http-error.ts";
 import { writeAudit } from "../../lib/audit.ts";
 import type { Actor } from "../../lib/actor.ts";
@@ -62,11 +62,12 @@ export async function clockState(db: Db, actor: Actor, now = new Date()): Promis
   const days = Array.from({ length: 7 }, (_, i) => ({ date: addCalendarDays(week.workweekStart, i), workedMinutes: 0 }));
   for (const entry of entries) {
     const end = entry.endedAt ? new Date(entry.endedAt) : now;
-    const start = new Date(Math.max(new Date(entry.startedAt).getTime(), week.start.getTime()));
+    const start = new Date(entry.startedAt);
     if (end <= start) continue;
-    const breakMs = entry.breaks.reduce((sum, b) => sum + ((b.endedAt ? new Date(b.endedAt) : now).getTime() - new Date(b.startedAt).getTime()), 0);
-    const day = days.find((d) => d.date === workdayOf(start, payroll.settings));
-    if (day) day.workedMinutes += Math.max(0, Math.round((end.getTime() - start.getTime() - breakMs) / 60_000));
+    const unpaidBreaks = entry.breaks.map((b) => ({ start: new Date(b.startedAt), end: b.endedAt ? new Date(b.endedAt) : now }));
+    const byDay = clockedMinutesByWorkday({ id: String(entry.id), staffId: actor.userId, rateCode: entry.payRateCode, start, end, unpaidBreaks }, payroll.settings);
+    // Days outside this workweek (a shift begun on the last day of the one before) drop out here.
+    for (const day of days) day.workedMinutes += Math.round(byDay.get(day.date) ?? 0);
   }
   const rows = await sessionsNow(db, actor.userId, now);
   return {

@@ -1,8 +1,10 @@
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { and, eq, isNull } from "drizzle-orm";
-import { auditEvents, timeEntries } from "@takeup/db";
+import { DateTime } from "luxon";
+import { auditEvents, staffProfiles, timeEntries } from "@takeup/db";
 import { createTestApp, type TestApp } from "../../test/harness.ts";
 import { demo } from "../../test/demo.ts";
+import { clockState } from "./time-clock.service.ts";
 
 let t: TestApp;
 beforeAll(async () => {
@@ -113,5 +115,19 @@ describe("corrections", () => {
     const approve = await manager.post(`/api/time-entry-edits/${edit.body.id}/approve`).send({});
     expect(approve.status).toBe(409);
     expect(approve.body.error.code).toBe("entry_overlap");
+  });
+});
+
+describe("the week so far on the clock", () => {
+  it("counts the seeded shift past midnight on both days it touched", async () => {
+    const [jo] = await t.db.select().from(staffProfiles).where(eq(staffProfiles.displayName, "Jo Kettering"));
+    // Seen from last Sunday, the seed's last week: Jo's Thursday 20:00 to Friday 01:35 engineer shift.
+    const lastWeek = DateTime.now().setZone("America/Chicago").startOf("week").minus({ weeks: 1 });
+    const actor = { userId: jo!.userId, name: "Jo Kettering", email: "jo@wrenfield.test", role: "engineer" as const, clientAccountId: null, clientAccountName: null, active: true };
+    const state = await clockState(t.db, actor, lastWeek.plus({ days: 6, hours: 12 }).toJSDate());
+    expect(state.week.workweekStart).toBe(lastWeek.toISODate());
+    // Wednesday is the lockout as assistant, 10:30–19:10 less a 30-minute break.
+    expect(state.week.days.map((d) => d.workedMinutes)).toEqual([0, 0, 490, 240, 95, 0, 0]);
+    expect(state.week.workedMinutes).toBe(825);
   });
 });
