@@ -25,7 +25,6 @@ export const updateStudioInput = z.strictObject({
     .refine(isValidTimeZone, "Use an IANA time zone such as America/Chicago")
     .optional(),
   currency: z.enum(supportedCurrencies as [string, ...string[]]).optional(),
-  workweekStartDay: z.number().int().min(1).max(7).optional(),
   address: optionalText(500),
   email: optionalEmail,
   phone: optionalText(40),

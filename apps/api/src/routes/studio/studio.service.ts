@@ -21,10 +21,13 @@ export async function updateStudio(db: Db, actor: Actor, input: UpdateStudioInpu
       name: input.name,
       timeZone: input.timeZone,
       currency: input.currency,
-      workweekStartDay: input.workweekStartDay,
       address: blankToNull(input.address),
       email: blankToNull(input.email),
       phone: blankToNull(input.phone),
+      holdHours: input.holdHours,
+      depositBp: input.depositBp,
+      // Kept shortest notice first, the order the fee schedule is read and shown in.
+      cancellationTiers: input.cancellationTiers ? [...input.cancellationTiers].sort((a, b) => a.noticeUnderHours - b.noticeUnderHours) : undefined,
     };
     await tx.update(studio).set(changes).where(eq(studio.id, 1));
     const after = await loadStudio(tx);

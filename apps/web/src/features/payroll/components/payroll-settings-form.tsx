@@ -18,7 +18,7 @@ import { Select } from "../../../components/ui/select.tsx";
 import { useToast } from "../../../components/ui/use-toast.ts";
 import { applyApiErrors } from "../../../lib/form-errors.ts";
 import { minuteToTime } from "../../../lib/studio-time.ts";
-import { weekdays } from "../../studio/components/weekdays.ts";
+import { weekdays } from "../../../lib/weekdays.ts";
 import { useUpdatePayrollSettings } from "../api/update-payroll-settings.ts";
 import { payPeriodKindLabels } from "./period-format.ts";
 

@@ -13,7 +13,9 @@ import { ApiError } from "../../../lib/api-client.ts";
 import { applyApiErrors } from "../../../lib/form-errors.ts";
 import { bpToPercent, percentToBp } from "../../../lib/units.ts";
 import { useUpdateStudio } from "../api/update-studio.ts";
-import { weekdays } from "./weekdays.ts";
+import { Link } from "react-router";
+import { paths } from "../../../config/paths.ts";
+import { weekdays } from "../../../lib/weekdays.ts";
 
 const maxTiers = 6;
 
@@ -37,7 +39,6 @@ const fields = [
   "name",
   "timeZone",
   "currency",
-  "workweekStartDay",
   "address",
   "email",
   "phone",
@@ -50,7 +51,6 @@ const toFormValues = (studio: StudioDto): SettingsFormInput => ({
   name: studio.name,
   timeZone: studio.timeZone,
   currency: studio.currency,
-  workweekStartDay: studio.workweekStartDay,
   address: studio.address ?? "",
   email: studio.email ?? "",
   phone: studio.phone ?? "",
@@ -126,17 +126,16 @@ export function StudioSettingsForm({ studio }: { studio: StudioDto }) {
             </Select>
           )}
         </FormField>
-        <FormField label="Workweek starts on" error={errors.workweekStartDay?.message}>
-          {(field) => (
-            <Select {...field} {...register("workweekStartDay", { valueAsNumber: true })}>
-              {weekdays.map((day) => (
-                <option key={day.value} value={day.value}>
-                  {day.label}
-                </option>
-              ))}
-            </Select>
-          )}
-        </FormField>
+        {/* The workweek decides overtime, so it is changed with the other payroll rules (and audited with them). */}
+        <div className="flex flex-col gap-1.5">
+          <p className="text-sm font-semibold">Workweek starts on</p>
+          <p className="py-2">
+            {weekdays.find((day) => day.value === studio.workweekStartDay)?.label}{" "}
+            <Link to={paths.payrollSettings.getHref()} className="ml-2 text-sm font-medium text-rust-deep underline-offset-2 hover:underline">
+              Change in Payroll settings
+            </Link>
+          </p>
+        </div>
       </div>
       <FormField label="Address" optional error={errors.address?.message}>
         {(field) => <Textarea {...field} {...register("address")} autoComplete="street-address" />}
