@@ -37,7 +37,8 @@ function readPid(dir) {
  */
 export async function startMariaDb({ dir, port, database }) {
   ensureDebianPackage("mariadbd", "mariadb-server");
-  mkdirSync(dir, { recursive: true });
+  // Its own temp dir: nothing another process does in /tmp can pull a temp table away from it.
+  mkdirSync(`${dir}/tmp`, { recursive: true });
   if (!existsSync(`${dir}/data/mysql`)) {
     log(`initialising a private MariaDB data directory in ${dir}`);
     const init = spawnSync(
@@ -46,6 +47,7 @@ export async function startMariaDb({ dir, port, database }) {
         "--no-defaults",
         `--datadir=${dir}/data`,
         `--socket=${dir}/mysqld.sock`,
+        `--tmpdir=${dir}/tmp`,
         "--user=root",
         "--auth-root-authentication-method=socket",
         "--skip-test-db",
@@ -65,6 +67,7 @@ export async function startMariaDb({ dir, port, database }) {
         "--no-defaults",
         `--datadir=${dir}/data`,
         `--socket=${dir}/mysqld.sock`,
+        `--tmpdir=${dir}/tmp`,
         "--user=root",
         `--port=${port}`,
         "--bind-address=127.0.0.1",

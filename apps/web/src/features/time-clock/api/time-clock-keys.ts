@@ -8,4 +8,5 @@ export const timeClockKeys = {
   entryList: (params: TimeEntriesParams) => [...timeClockKeys.entries(), params] as const,
   edits: () => [...timeClockKeys.all, "edits"] as const,
   editList: (params: TimeEntryEditsParams) => [...timeClockKeys.edits(), params] as const,
+  sessionsAround: (staffUserId: string, day: string) => [...timeClockKeys.all, "sessions", staffUserId, day] as const,
 };

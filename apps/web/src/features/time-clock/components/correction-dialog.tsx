@@ -1,5 +1,5 @@
 import { useMemo, useState } from "react";
-import { useFieldArray, useForm } from "react-hook-form";
+import { useFieldArray, useForm, useWatch, type UseFormRegisterReturn } from "react-hook-form";
 import { zodResolver } from "@hookform/resolvers/zod";
 import { z } from "zod";
 import { proposeEditInput, type ProposeEditInput, type TimeEntryDto } from "@takeup/domain";
@@ -7,11 +7,13 @@ import { Button } from "../../../components/ui/button.tsx";
 import { Dialog, DialogActions } from "../../../components/ui/dialog.tsx";
 import { FormAlert, FormField } from "../../../components/ui/form-field.tsx";
 import { Input } from "../../../components/ui/input.tsx";
+import { Select } from "../../../components/ui/select.tsx";
 import { Textarea } from "../../../components/ui/textarea.tsx";
 import { useToast } from "../../../components/ui/use-toast.ts";
 import { ApiError } from "../../../lib/api-client.ts";
 import { applyApiErrors } from "../../../lib/form-errors.ts";
 import { formatDayShort, formatTimeRange, studioLocalDateTimeToIso, studioParts } from "../../../lib/studio-time.ts";
+import { useSessionsAround } from "../api/get-sessions-around.ts";
 import { useProposeEdit } from "../api/propose-edit.ts";
 import { inStudioTime } from "./studio-message.ts";
 
@@ -20,11 +22,13 @@ type CorrectionDialogProps = {
   onClose: () => void;
   /** The entry to correct; leave out to add missing time. */
   entry?: TimeEntryDto;
+  /** Whose time it is: their sessions are offered to tie the time to. */
+  staffUserId: string;
   timeZone: string;
 };
 
 /** "Ask for a correction" to an entry, or "Add missing time": nothing changes until a manager approves. */
-export function CorrectionDialog({ open, onClose, entry, timeZone }: CorrectionDialogProps) {
+export function CorrectionDialog({ open, onClose, entry, staffUserId, timeZone }: CorrectionDialogProps) {
   const description = entry ? (
     <>
       Your entry on {formatDayShort(studioParts(entry.startedAt, timeZone).date)},{" "}
@@ -36,7 +40,7 @@ export function CorrectionDialog({ open, onClose, entry, timeZone }: CorrectionD
   );
   return (
     <Dialog open={open} onClose={onClose} title={entry ? "Ask for a correction" : "Add missing time"} description={description}>
-      <CorrectionForm entry={entry} timeZone={timeZone} onDone={onClose} onCancel={onClose} />
+      <CorrectionForm entry={entry} staffUserId={staffUserId} timeZone={timeZone} onDone={onClose} onCancel={onClose} />
     </Dialog>
   );
 }
@@ -56,6 +60,8 @@ function correctionForm(timeZone: string) {
       start: z.string().min(1, "Enter when you started"),
       end: z.string().min(1, "Enter when you finished"),
       breaks: z.array(z.object({ from: z.string(), to: z.string() })),
+      /** A booking id, or SHOP for time that was not a session. */
+      session: z.string(),
       reason: proposeEditInput.shape.reason,
     })
     .superRefine((values, ctx) => {
@@ -82,7 +88,8 @@ function correctionForm(timeZone: string) {
 }
 type CorrectionValues = z.infer<ReturnType<typeof correctionForm>>;
 
-const fields = ["start", "end", "breaks", "reason"] as const;
+const fields = ["start", "end", "breaks", "session", "reason"] as const;
+const SHOP = "shop";
 
 /** The API names the contract's fields; the form shows them under its own. */
 function inFormTerms(error: unknown): unknown {
@@ -93,7 +100,8 @@ function inFormTerms(error: unknown): unknown {
       .replace(/^endedAt$/, "end")
       .replace(/^breaks\.(\d+)\.startedAt$/, "breaks.$1.from")
       .replace(/^breaks\.(\d+)\.endedAt$/, "breaks.$1.to")
-      .replace(/^breaks\.(\d+)$/, "breaks.$1.from");
+      .replace(/^breaks\.(\d+)$/, "breaks.$1.from")
+      .replace(/^bookingId$/, "session");
   return new ApiError(error.status, error.code, error.message, error.details.map((d) => ({ ...d, field: rename(d.field) })));
 }
 
@@ -104,13 +112,14 @@ function defaults(entry: TimeEntryDto | undefined, timeZone: string): Correction
     end: entry?.endedAt ? localValue(entry.endedAt, timeZone) : "",
     // One empty pair is offered even without breaks; left empty, it is no break.
     breaks: closed.length > 0 ? closed.map((b) => ({ from: localValue(b.startedAt, timeZone), to: localValue(b.endedAt, timeZone) })) : [{ from: "", to: "" }],
+    session: entry?.booking ? String(entry.booking.id) : SHOP,
     reason: "",
   };
 }
 
-type CorrectionFormProps = { entry?: TimeEntryDto; timeZone: string; onDone: () => void; onCancel: () => void };
+type CorrectionFormProps = { entry?: TimeEntryDto; staffUserId: string; timeZone: string; onDone: () => void; onCancel: () => void };
 
-function CorrectionForm({ entry, timeZone, onDone, onCancel }: CorrectionFormProps) {
+function CorrectionForm({ entry, staffUserId, timeZone, onDone, onCancel }: CorrectionFormProps) {
   const toast = useToast();
   const [formError, setFormError] = useState<string | null>(null);
   const schema = useMemo(() => correctionForm(timeZone), [timeZone]);
@@ -130,8 +139,7 @@ function CorrectionForm({ entry, timeZone, onDone, onCancel }: CorrectionFormPro
       endedAt: iso(values.end),
       // The proposal replaces the entry's breaks, so the ones kept are sent again.
       breaks: values.breaks.filter((b) => b.from && b.to).map((b) => ({ startedAt: iso(b.from), endedAt: iso(b.to) })),
-      // A correction keeps the entry's session (or its shop time); missing time is shop time.
-      ...(entry ? { bookingId: entry.booking?.id ?? null } : {}),
+      bookingId: values.session === SHOP ? null : Number(values.session),
       reason: values.reason.trim(),
     };
     propose.mutate(input, {
@@ -147,6 +155,8 @@ function CorrectionForm({ entry, timeZone, onDone, onCancel }: CorrectionFormPro
   });
 
   const { errors } = formState;
+  const start = useWatch({ control, name: "start" });
+  const startDay = wallClock.test(start) ? start.slice(0, 10) : entry ? studioParts(entry.startedAt, timeZone).date : null;
   return (
     <form onSubmit={onSubmit} noValidate className="flex flex-col gap-4">
       <FormAlert message={formError} />
@@ -158,6 +168,7 @@ function CorrectionForm({ entry, timeZone, onDone, onCancel }: CorrectionFormPro
           {(field) => <Input {...field} {...register("end")} type="datetime-local" step={60} />}
         </FormField>
       </div>
+      <SessionField staffUserId={staffUserId} day={startDay} timeZone={timeZone} current={entry?.booking ?? null} error={errors.session?.message} register={register("session")} />
       <fieldset className="flex min-w-0 flex-col gap-3">
         <legend className="text-sm font-semibold">Breaks</legend>
         <p className="-mt-1 text-sm text-muted">Unpaid breaks inside this time. Leave a break empty if there was none.</p>
@@ -197,3 +208,38 @@ function CorrectionForm({ entry, timeZone, onDone, onCancel }: CorrectionFormPro
     </form>
   );
 }
+
+type SessionFieldProps = {
+  staffUserId: string;
+  day: string | null;
+  timeZone: string;
+  current: TimeEntryDto["booking"];
+  error?: string;
+  register: UseFormRegisterReturn<"session">;
+};
+
+/** Shop time, or one of the person's sessions around the day the time starts on. */
+function SessionField({ staffUserId, day, timeZone, current, error, register }: SessionFieldProps) {
+  const sessions = useSessionsAround(staffUserId, day, timeZone);
+  const options = (sessions.data ?? []).map((s) => ({
+    value: String(s.id),
+    label: `${s.clientName} — ${s.roomName}, ${formatTimeRange(s.startsAt, s.endsAt, timeZone, { withDay: true })}`,
+  }));
+  // The entry's own session stays on offer even when it lies outside the days looked at.
+  if (current && !options.some((o) => o.value === String(current.id))) options.unshift({ value: String(current.id), label: `${current.clientName} — ${current.roomName}` });
+  return (
+    <FormField label="Session" hint={sessions.isPending && day ? "Looking up your sessions…" : "The session this time was for, or shop time."} error={error}>
+      {(field) => (
+        <Select {...field} {...register}>
+          <option value={SHOP}>Shop time (not a session)</option>
+          {options.map((o) => (
+            <option key={o.value} value={o.value}>
+              {o.label}
+            </option>
+          ))}
+        </Select>
+      )}
+    </FormField>
+  );
+}
+

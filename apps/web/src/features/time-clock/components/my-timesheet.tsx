@@ -83,7 +83,7 @@ export function MyTimesheet({ staffUserId, timeZone, workweekStartDay }: MyTimes
         </div>
         <MyCorrections staffUserId={staffUserId} timeZone={timeZone} />
       </section>
-      {dialog ? <CorrectionDialog open onClose={() => setDialog(null)} entry={dialog.entry} timeZone={timeZone} /> : null}
+      {dialog ? <CorrectionDialog open onClose={() => setDialog(null)} entry={dialog.entry} staffUserId={staffUserId} timeZone={timeZone} /> : null}
     </div>
   );
 }
