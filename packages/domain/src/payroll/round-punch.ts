@@ -1,4 +1,4 @@
-import { DateTime } from "luxon";
+import { offsetMinutesAt } from "../shared/zone-offset.ts";
 import type { PunchRounding } from "./types.ts";
 
 const minuteMs = 60_000;
@@ -19,11 +19,10 @@ const gridMinutes: Record<PunchRounding, number> = { none: 1, "5": 5, "6": 6, "1
  * With "none" the punch still lands on the whole minute, seconds rounding the same way.
  */
 export function roundPunch(at: Date, rounding: PunchRounding, timeZone: string): Date {
-  const local = DateTime.fromJSDate(at, { zone: timeZone });
-  if (!local.isValid) throw new RangeError(`Cannot read ${String(at)} in ${timeZone}`);
-  const stepMs = gridMinutes[rounding] * minuteMs;
   const instantMs = at.getTime();
-  const wallMs = instantMs + local.offset * minuteMs;
+  if (!Number.isFinite(instantMs)) throw new RangeError(`Cannot read ${String(at)} in ${timeZone}`);
+  const stepMs = gridMinutes[rounding] * minuteMs;
+  const wallMs = instantMs + offsetMinutesAt(instantMs, timeZone) * minuteMs;
   const past = ((wallMs % stepMs) + stepMs) % stepMs;
   if (past === 0) return new Date(instantMs);
   return new Date(past * 2 >= stepMs ? instantMs - past + stepMs : instantMs - past);

@@ -1,4 +1,5 @@
 import { DateTime } from "luxon";
+import { wallClock } from "../shared/zone-offset.ts";
 import type { IsoWeekday, StudioCalendar } from "./types.ts";
 
 /**
@@ -22,43 +23,65 @@ export function assertCalendar(calendar: StudioCalendar): void {
   }
 }
 
-/** Pure date arithmetic; UTC so that no zone rule can shift the day. */
-function calendarDate(date: string): DateTime {
-  const parsed = isoDate.test(date) ? DateTime.fromISO(date, { zone: "utc" }) : null;
-  if (!parsed || !parsed.isValid) throw new RangeError(`Not a calendar date: ${date}`);
-  return parsed;
+const dayMs = 86_400_000;
+const pad = (n: number, width = 2) => String(n).padStart(width, "0");
+
+/** Pure date arithmetic on UTC midnights, so that no zone rule can shift the day. */
+function calendarDayMs(date: string): number {
+  const match = isoDate.test(date) ? date.split("-").map(Number) : null;
+  const [year, month, day] = match ?? [];
+  const ms = match ? Date.UTC(year!, month! - 1, day!) : Number.NaN;
+  const back = new Date(ms);
+  // Date.UTC rolls 30 February over into March; a real calendar date comes back unchanged.
+  if (!Number.isFinite(ms) || back.getUTCFullYear() !== year || back.getUTCMonth() !== month! - 1 || back.getUTCDate() !== day) {
+    throw new RangeError(`Not a calendar date: ${date}`);
+  }
+  return ms;
 }
 
+const formatDay = (utcMidnight: Date) => `${pad(utcMidnight.getUTCFullYear(), 4)}-${pad(utcMidnight.getUTCMonth() + 1)}-${pad(utcMidnight.getUTCDate())}`;
+
 export function addDays(date: string, days: number): string {
-  return calendarDate(date).plus({ days }).toISODate() ?? date;
+  return formatDay(new Date(calendarDayMs(date) + days * dayMs));
 }
 
 export function isoWeekdayOf(date: string): IsoWeekday {
-  return calendarDate(date).weekday as IsoWeekday;
+  return (((new Date(calendarDayMs(date)).getUTCDay() + 6) % 7) + 1) as IsoWeekday;
 }
 
 export function assertCalendarDate(date: string): void {
-  calendarDate(date);
+  calendarDayMs(date);
 }
 
 /** The workday an instant belongs to. */
 export function workdayOf(at: Date, calendar: StudioCalendar): string {
-  const local = DateTime.fromJSDate(at, { zone: calendar.timeZone });
-  const day = local.hour < calendar.workweekStart.hour ? local.minus({ days: 1 }) : local;
-  return day.toISODate() ?? "";
+  const wall = wallClock(at.getTime(), calendar.timeZone);
+  const day = new Date(Date.UTC(wall.getUTCFullYear(), wall.getUTCMonth(), wall.getUTCDate()));
+  return formatDay(wall.getUTCHours() < calendar.workweekStart.hour ? new Date(day.getTime() - dayMs) : day);
 }
+
+/** Workday starts already worked out: the rules engine asks for the same few days many times. */
+const workdayStarts = new Map<string, number>();
 
 /**
  * The instant a workday begins. If the start hour does not exist that day (a spring-forward
  * gap), luxon moves it to the first instant that does, which keeps days contiguous.
  */
 export function workdayStart(workday: string, calendar: StudioCalendar): Date {
-  const { year, month, day } = calendarDate(workday);
-  return DateTime.fromObject(
-    { year, month, day, hour: calendar.workweekStart.hour },
-    { zone: calendar.timeZone },
-  ).toJSDate();
+  const key = `${calendar.timeZone}|${calendar.workweekStart.hour}|${workday}`;
+  let ms = workdayStarts.get(key);
+  if (ms === undefined) {
+    const at = new Date(calendarDayMs(workday));
+    ms = DateTime.fromObject(
+      { year: at.getUTCFullYear(), month: at.getUTCMonth() + 1, day: at.getUTCDate(), hour: calendar.workweekStart.hour },
+      { zone: calendar.timeZone },
+    ).toMillis();
+    if (workdayStarts.size >= 100_000) workdayStarts.clear();
+    workdayStarts.set(key, ms);
+  }
+  return new Date(ms);
 }
+
 
 /** First workday of the workweek holding the given workday. */
 export function workweekStartOf(workday: string, calendar: StudioCalendar): string {

@@ -6,8 +6,21 @@ const minute = 60_000;
 /** [P] common practice: a shift over six hours usually includes a meal break; we flag, never deduct. */
 const breakExpectedAfterMinutes = 6 * 60;
 
-export async function loadEntryDtos(db: DbOrTx, where: SQL | undefined, openLimitHours: number, now = new Date()): Promise<TimeEntryDto[]> {
-  const rows = await db
+/** Ids per `IN (…)` list: large periods are read in batches, never in one giant statement. */
+const idBatch = 5_000;
+
+function batches<T>(items: readonly T[], size: number): T[][] {
+  const out: T[][] = [];
+  for (let i = 0; i < items.length; i += size) out.push(items.slice(i, i + size));
+  return out;
+}
+
+/**
+ * Entries with their breaks and flags. Without `limit` every matching entry is read: payroll
+ * must never pay part of a period without saying so.
+ */
+export async function loadEntryDtos(db: DbOrTx, where: SQL | undefined, openLimitHours: number, now = new Date(), limit?: number): Promise<TimeEntryDto[]> {
+  const query = db
     .select({ entry: timeEntries, staffName: staffProfiles.displayName, roomName: rooms.name, clientName: clientAccounts.name })
     .from(timeEntries)
     .innerJoin(staffProfiles, eq(staffProfiles.userId, timeEntries.staffUserId))
@@ -15,18 +28,26 @@ export async function loadEntryDtos(db: DbOrTx, where: SQL | undefined, openLimi
     .leftJoin(rooms, eq(rooms.id, bookings.roomId))
     .leftJoin(clientAccounts, eq(clientAccounts.id, bookings.clientAccountId))
     .where(where)
-    .orderBy(asc(timeEntries.startedAt), asc(timeEntries.id))
-    .limit(20_000);
+    .orderBy(asc(timeEntries.startedAt), asc(timeEntries.id));
+  const rows = await (limit === undefined ? query : query.limit(limit));
   if (rows.length === 0) return [];
-  const ids = rows.map((r) => r.entry.id);
-  const breaks = await db.select().from(timeEntryBreaks).where(inArray(timeEntryBreaks.timeEntryId, ids)).orderBy(asc(timeEntryBreaks.startedAt));
-  const pending = await db
-    .select({ timeEntryId: timeEntryEdits.timeEntryId })
-    .from(timeEntryEdits)
-    .where(and(inArray(timeEntryEdits.timeEntryId, ids), eq(timeEntryEdits.status, "pending")));
-  const pendingIds = new Set(pending.map((p) => p.timeEntryId));
+  const breaksByEntry = new Map<number, (typeof timeEntryBreaks.$inferSelect)[]>();
+  const pendingIds = new Set<number | null>();
+  for (const ids of batches(rows.map((r) => r.entry.id), idBatch)) {
+    const breaks = await db.select().from(timeEntryBreaks).where(inArray(timeEntryBreaks.timeEntryId, ids)).orderBy(asc(timeEntryBreaks.startedAt));
+    for (const b of breaks) {
+      const list = breaksByEntry.get(b.timeEntryId);
+      if (list) list.push(b);
+      else breaksByEntry.set(b.timeEntryId, [b]);
+    }
+    const pending = await db
+      .select({ timeEntryId: timeEntryEdits.timeEntryId })
+      .from(timeEntryEdits)
+      .where(and(inArray(timeEntryEdits.timeEntryId, ids), eq(timeEntryEdits.status, "pending")));
+    for (const p of pending) pendingIds.add(p.timeEntryId);
+  }
   return rows.map(({ entry, staffName, roomName, clientName }) => {
-    const own = breaks.filter((b) => b.timeEntryId === entry.id);
+    const own = breaksByEntry.get(entry.id) ?? [];
     const breakMs = own.reduce((sum, b) => sum + ((b.endedAt ?? entry.endedAt ?? now).getTime() - b.startedAt.getTime()), 0);
     const workedMinutes = entry.endedAt ? Math.round((entry.endedAt.getTime() - entry.startedAt.getTime() - breakMs) / minute) : null;
     const flags: TimeEntryDto["flags"] = [];

@@ -141,11 +141,17 @@ export async function toggleBreak(db: Db, actor: Actor, action: "start" | "end",
   return entryDto(db, id);
 }
 
+const maxListDays = 62;
+
 /** Entries of a studio-local date range, for one person or (staff with the right) everyone. */
 export async function listEntries(db: Db, from: string, to: string, staffUserId: string | undefined) {
   const payroll = await loadPayroll(db);
   const start = workdayStart(from, payroll.settings);
   const end = workdayStart(addCalendarDays(to, 1), payroll.settings);
   if (end <= start) throw new HttpError(400, "invalid_input", "`to` must not be before `from`", [{ field: "to", rule: "after_from", message: "On or after from" }]);
+  // A bounded range instead of a silent row limit: the list is always complete.
+  if (end.getTime() - start.getTime() > maxListDays * 24 * hour) {
+    throw new HttpError(400, "invalid_input", `Ask for at most ${maxListDays} days at a time`, [{ field: "to", rule: "max_range", message: `At most ${maxListDays} days after from` }]);
+  }
   return loadEntryDtos(db, and(gte(timeEntries.startedAt, start), lt(timeEntries.startedAt, end), staffUserId ? eq(timeEntries.staffUserId, staffUserId) : undefined), payroll.dto.openEntryLimitHours);
 }

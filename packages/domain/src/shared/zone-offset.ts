@@ -1,0 +1,37 @@
+import { DateTime } from "luxon";
+
+/**
+ * A zone's UTC offset at an instant, looked up once per quarter hour and zone. Payroll reads
+ * the offset for every punch and every workday boundary; asking luxon each time cost more
+ * than all the rest of the rules engine (docs/benchmarks.md, payroll).
+ *
+ * Exact, not approximate: a quarter hour whose two ends have different offsets (a change
+ * falls inside it) is never cached, and each instant in it is asked of luxon.
+ */
+const bucketMs = 15 * 60_000;
+const maxCached = 200_000;
+const cache = new Map<string, number>();
+
+function luxonOffset(ms: number, timeZone: string): number {
+  const local = DateTime.fromMillis(ms, { zone: timeZone });
+  if (!local.isValid) throw new RangeError(`Cannot read ${new Date(ms).toISOString()} in ${timeZone}`);
+  return local.offset;
+}
+
+/** Minutes to add to UTC for local wall time (−360 for Chicago in winter). */
+export function offsetMinutesAt(ms: number, timeZone: string): number {
+  const bucket = Math.floor(ms / bucketMs);
+  const key = `${timeZone}|${bucket}`;
+  const known = cache.get(key);
+  if (known !== undefined) return known;
+  const first = luxonOffset(bucket * bucketMs, timeZone);
+  if (luxonOffset((bucket + 1) * bucketMs - 1, timeZone) !== first) return luxonOffset(ms, timeZone);
+  if (cache.size >= maxCached) cache.clear();
+  cache.set(key, first);
+  return first;
+}
+
+/** Local wall time as a UTC-based Date: read it only with the getUTC… methods. */
+export function wallClock(ms: number, timeZone: string): Date {
+  return new Date(ms + offsetMinutesAt(ms, timeZone) * 60_000);
+}
