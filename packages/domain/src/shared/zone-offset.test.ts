@@ -2,7 +2,7 @@ import fc from "fast-check";
 import { DateTime } from "luxon";
 import { describe, expect, it } from "vitest";
 import { addDays, isoWeekdayOf, workdayOf } from "../payroll/studio-calendar.ts";
-import { offsetMinutesAt } from "./zone-offset.ts";
+import { localDateTime, offsetMinutesAt } from "./zone-offset.ts";
 
 // Zones whose rules are awkward: whole-hour DST, a half-hour DST shift (Lord Howe), and
 // offsets of :30 and :45 without DST. Luxon (the IANA database through Intl) is the reference.
@@ -48,5 +48,16 @@ describe("the cached zone offset", () => {
     );
     expect(() => addDays("2026-02-30", 1)).toThrow(RangeError);
     expect(() => addDays("2026-2-3", 1)).toThrow(RangeError);
+  });
+});
+
+describe("studio wall time for the exports", () => {
+  it("writes the minute in the zone, as luxon would format it", () => {
+    fc.assert(
+      fc.property(fc.integer({ min: from, max: to }), fc.constantFrom(...zones), (ms, zone) => {
+        expect(localDateTime(ms, zone)).toBe(DateTime.fromMillis(ms, { zone }).toFormat("yyyy-MM-dd HH:mm"));
+      }),
+      { numRuns: 2000 },
+    );
   });
 });

@@ -35,3 +35,11 @@ export function offsetMinutesAt(ms: number, timeZone: string): number {
 export function wallClock(ms: number, timeZone: string): Date {
   return new Date(ms + offsetMinutesAt(ms, timeZone) * 60_000);
 }
+
+const pad = (n: number) => String(n).padStart(2, "0");
+
+/** "2026-12-07 09:58": studio wall time to the minute (seconds dropped), as the exports write it. */
+export function localDateTime(ms: number, timeZone: string): string {
+  const wall = wallClock(ms, timeZone);
+  return `${wall.getUTCFullYear()}-${pad(wall.getUTCMonth() + 1)}-${pad(wall.getUTCDate())} ${pad(wall.getUTCHours())}:${pad(wall.getUTCMinutes())}`;
+}

@@ -44,15 +44,22 @@ export async function computePeriod(db: DbOrTx, payroll: PayrollContext, row: Pa
   // A locked period is computed with the settings and rates it was locked with.
   const settings = row.status === "locked" && row.lockedSettings ? row.lockedSettings : payroll.settings;
   const rates = row.status === "locked" && row.lockedPayRates ? row.lockedPayRates : await currentPayRates(db);
+  // The earliest date each person's rate code applies from: an entry before it has no rate.
+  const firstRateDay = new Map<string, string>();
+  for (const r of rates) {
+    const key = `${r.staffId}|${r.rateCode}`;
+    const known = firstRateDay.get(key);
+    if (known === undefined || r.effectiveFrom < known) firstRateDay.set(key, r.effectiveFrom);
+  }
   const hasRate = (e: TimeEntryDto) => {
-    const workday = workdayOf(new Date(e.startedAt), settings);
-    return rates.some((r) => r.staffId === e.staffUserId && r.rateCode === e.payRateCode && r.effectiveFrom <= workday);
+    const from = firstRateDay.get(`${e.staffUserId}|${e.payRateCode}`);
+    return from !== undefined && from <= workdayOf(new Date(e.startedAt), settings);
   };
   const closed = entries.filter((e) => e.endedAt !== null);
-  const unpriced = closed.filter((e) => !hasRate(e));
-  const engineInput: TimeEntry[] = closed
-    .filter(hasRate)
-    .map((e) => ({
+  const priced: TimeEntryDto[] = [];
+  const unpriced: TimeEntryDto[] = [];
+  for (const e of closed) (hasRate(e) ? priced : unpriced).push(e);
+  const engineInput: TimeEntry[] = priced.map((e) => ({
       id: String(e.id),
       staffId: e.staffUserId,
       start: new Date(e.startedAt),

@@ -1,13 +1,12 @@
 // The payroll export: column layout documented in docs/payroll-export.md and kept stable.
 import type { Response } from "express";
 import ExcelJS from "exceljs";
-import { DateTime } from "luxon";
-import { payrollCaution } from "@takeup/domain";
+import { localDateTime, payrollCaution, type EntryTrace } from "@takeup/domain";
 import type { ComputedPeriod } from "./compute-period.ts";
 
 const hours = (minutes: number) => Math.round((minutes / 60) * 100) / 100;
 const dollars = (cents: number) => cents / 100;
-const local = (iso: string | Date | null, zone: string) => (iso ? DateTime.fromJSDate(new Date(iso), { zone }).toFormat("yyyy-MM-dd HH:mm") : "");
+const local = (iso: string | Date | null, zone: string) => (iso ? localDateTime(new Date(iso).getTime(), zone) : "");
 
 export const summaryColumns = [
   { header: "Staff ID", key: "staffId", width: 34 },
@@ -136,8 +135,8 @@ export async function writeWorkbook(c: ComputedPeriod, res: Response, timeZone: 
     { header: "Note", key: "note", width: 40 },
   ];
   raw.getRow(1).font = { bold: true };
-  const traces = new Map(c.result.entries.map((t) => [t.entryId, t]));
-  for (const e of exportedEntries(c)) {
+  const { entries, traces } = exportedEntries(c);
+  for (const e of entries) {
     const trace = traces.get(String(e.id));
     raw.addRow({
       id: e.id,
@@ -160,10 +159,21 @@ export async function writeWorkbook(c: ComputedPeriod, res: Response, timeZone: 
   await workbook.commit();
 }
 
-/** The entries behind the summary's figures, plus entries in the period that are not paid yet. */
-export function exportedEntries(c: ComputedPeriod) {
+/**
+ * The entries behind the summary's figures, plus the period's entries that add nothing to them:
+ * still open, without a pay rate, or rounded to no paid time. An entry of the period whose
+ * workweek is paid in the next period (docs/payroll-export.md) waits for that period's file.
+ */
+export function exportedEntries(c: ComputedPeriod): { entries: ComputedPeriod["entries"]; traces: Map<string, EntryTrace> } {
+  const traces = new Map(c.result.entries.map((t) => [t.entryId, t]));
   const paid = new Set(c.summary.staff.flatMap((s) => s.entryIds));
+  const unpriced = new Set(c.unpriced.map((e) => e.id));
   const start = c.period.start.toISOString();
   const end = c.period.end.toISOString();
-  return c.entries.filter((e) => paid.has(String(e.id)) || (e.startedAt >= start && e.startedAt < end && (e.endedAt === null || c.unpriced.includes(e))));
+  const entries = c.entries.filter((e) => {
+    if (paid.has(String(e.id))) return true;
+    if (e.startedAt < start || e.startedAt >= end) return false;
+    return e.endedAt === null || unpriced.has(e.id) || traces.get(String(e.id))?.workedMinutes === 0;
+  });
+  return { entries, traces };
 }
