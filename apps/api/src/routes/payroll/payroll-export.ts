@@ -152,11 +152,18 @@ export async function writeWorkbook(c: ComputedPeriod, res: Response, timeZone: 
       breaks: trace?.breakMinutes ?? "",
       worked: trace ? hours(trace.workedMinutes) : "",
       rate: e.payRateCode,
-      note: e.note ?? (e.endedAt ? "" : "Still clocked in: not paid until closed"),
+      note: e.note ?? whyUnpaid(e, trace),
     }).commit();
   }
   raw.commit();
   await workbook.commit();
+}
+
+/** What the Entries sheet says of an entry that adds nothing to the figures. */
+function whyUnpaid(e: ComputedPeriod["entries"][number], trace: EntryTrace | undefined): string {
+  if (!e.endedAt) return "Still clocked in: not paid until closed";
+  if (!trace) return "No pay rate for this work on this date: not paid";
+  return trace.workedMinutes === 0 ? "Rounds to no paid time" : "";
 }
 
 /**
