@@ -118,6 +118,16 @@ describe("corrections", () => {
   });
 });
 
+describe("listing time entries", () => {
+  it("answers a range of at most 62 days in full, and refuses a longer one naming the field", async () => {
+    const manager = await t.signIn(demo.manager);
+    const longer = await manager.get("/api/time-entries?from=2026-01-01&to=2026-04-01");
+    expect(longer.status).toBe(400);
+    expect(longer.body.error.details[0]).toMatchObject({ field: "to", rule: "max_range" });
+    expect((await manager.get("/api/time-entries?from=2026-01-01&to=2026-03-03")).status).toBe(200);
+  });
+});
+
 describe("the week so far on the clock", () => {
   it("counts the seeded shift past midnight on both days it touched", async () => {
     const [jo] = await t.db.select().from(staffProfiles).where(eq(staffProfiles.displayName, "Jo Kettering"));
