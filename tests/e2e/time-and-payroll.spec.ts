@@ -285,6 +285,12 @@ describe("time clock and payroll", () => {
     // The CSV has no totals row: the summary rows alone.
     expect(csv).toEqual(new Map([...screen].filter(([name]) => name !== "Total")));
 
+    // Every figure leads to the entries behind it.
+    await table.getByRole("link", { name: "Priya Oduya" }).click();
+    await expect.poll(() => page.getByRole("heading", { name: `Priya Oduya, ${label}` }).count()).toBe(1);
+    await expect.poll(() => page.getByRole("table", { name: "Time entries" }).locator("tbody tr").count()).toBe(4);
+    await page.getByRole("link", { name: `← Pay period ${label}` }).click();
+
     await page.getByRole("link", { name: "← All pay periods" }).click();
     const row = page.getByRole("row").filter({ has: page.getByRole("link", { name: label, exact: true }) });
     await expect.poll(() => row.getByText("Locked").count()).toBeGreaterThan(0);

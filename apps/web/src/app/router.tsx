@@ -22,6 +22,7 @@ import { RouteError } from "./routes/route-error.tsx";
 import { MySessionsRoute } from "./routes/sessions/my-sessions.tsx";
 import { SessionsRoute } from "./routes/sessions/sessions.tsx";
 import { PayPeriodPage } from "./routes/payroll/pay-period.tsx";
+import { PayPeriodPersonPage } from "./routes/payroll/pay-period-person.tsx";
 import { PayPeriodsPage } from "./routes/payroll/pay-periods.tsx";
 import { PayRatesPage } from "./routes/payroll/pay-rates.tsx";
 import { PayrollSettingsPage } from "./routes/payroll/payroll-settings.tsx";
@@ -61,6 +62,7 @@ export const routes: RouteObject[] = [
           guarded(paths.approvals.path, areaRoles.approvals, <ApprovalsPage />),
           guarded(paths.payPeriods.list.path, areaRoles.payPeriods, <PayPeriodsPage />),
           guarded(paths.payPeriods.detail.path, areaRoles.payPeriods, <PayPeriodPage />),
+          guarded(paths.payPeriods.person.path, areaRoles.payPeriods, <PayPeriodPersonPage />),
           guarded(paths.payRates.path, areaRoles.payRates, <PayRatesPage />),
           guarded(paths.payrollSettings.path, areaRoles.payrollSettings, <PayrollSettingsPage />),
           guarded(paths.team.path, areaRoles.team, <TeamRoute />),

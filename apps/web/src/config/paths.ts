@@ -46,6 +46,10 @@ export const paths = {
   payPeriods: {
     list: { path: "/pay-periods", getHref: () => "/pay-periods" },
     detail: { path: "/pay-periods/:periodId", getHref: (id: number) => `/pay-periods/${id}` },
+    person: {
+      path: "/pay-periods/:periodId/staff/:staffUserId",
+      getHref: (id: number, staffUserId: string) => `/pay-periods/${id}/staff/${encodeURIComponent(staffUserId)}`,
+    },
   },
   payRates: { path: "/pay-rates", getHref: () => "/pay-rates" },
   payrollSettings: { path: "/payroll-settings", getHref: () => "/payroll-settings" },

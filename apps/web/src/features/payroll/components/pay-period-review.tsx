@@ -1,4 +1,5 @@
 import type { ReactNode } from "react";
+import { Link } from "react-router";
 import { formatMoney, overtimeRuleSetLabels, punchRoundingLabels, type PayPeriodReviewDto, type PayPeriodStaffDto, type Role } from "@takeup/domain";
 import { Card } from "../../../components/ui/card.tsx";
 import { cx } from "../../../lib/cx.ts";
@@ -6,6 +7,7 @@ import { formatDayShort } from "../../../lib/studio-time.ts";
 import { flagLabels } from "../../time-clock/components/entry-flags.tsx";
 import { inStudioTime } from "../../time-clock/components/studio-message.ts";
 import { canExportPayroll } from "../../../config/access.ts";
+import { paths } from "../../../config/paths.ts";
 import { ExportDownloads } from "./export-downloads.tsx";
 import { formatDecimalHours } from "./hours.ts";
 import { PeriodActions } from "./period-actions.tsx";
@@ -43,7 +45,7 @@ export function PayPeriodReview({ review, role, currency }: PayPeriodReviewProps
         </div>
       </section>
       <Flags flags={review.flags} timeZone={timeZone} />
-      <StaffTable staff={review.staff} currency={currency} />
+      <StaffTable periodId={review.period.id} staff={review.staff} currency={currency} />
     </div>
   );
 }
@@ -125,7 +127,7 @@ export function sumStaff(staff: readonly PayPeriodStaffDto[]): Totals {
   return totals;
 }
 
-function StaffTable({ staff, currency }: { staff: PayPeriodStaffDto[]; currency: string }) {
+function StaffTable({ periodId, staff, currency }: { periodId: number; staff: PayPeriodStaffDto[]; currency: string }) {
   const money = (cents: number) => formatMoney(cents, currency);
   const totals = sumStaff(staff);
   // Headers wrap onto two lines so all ten columns fit a laptop screen; figures never wrap.
@@ -186,7 +188,15 @@ function StaffTable({ staff, currency }: { staff: PayPeriodStaffDto[]; currency:
               staff.map((person) => (
                 <tr key={person.staffUserId} className="border-b border-line last:border-b-0">
                   <th scope="row" className="px-2.5 py-2 text-left align-top font-normal">
-                    <span className="block font-semibold whitespace-nowrap">{person.name}</span>
+                    <span className="block font-semibold whitespace-nowrap">
+                      <Link
+                        to={paths.payPeriods.person.getHref(periodId, person.staffUserId)}
+                        className="text-rust-deep underline-offset-2 hover:underline"
+                        title={`The entries behind ${person.name}'s figures`}
+                      >
+                        {person.name}
+                      </Link>
+                    </span>
                     {person.rates.map((r) => (
                       <span key={`${r.code}-${r.centsPerHour}`} className="block text-xs whitespace-nowrap text-muted">
                         {r.code} {money(r.centsPerHour)}/h

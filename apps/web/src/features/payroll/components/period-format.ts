@@ -1,5 +1,5 @@
 import type { PayPeriodKind } from "@takeup/domain";
-import { formatDayLong, studioParts } from "../../../lib/studio-time.ts";
+import { addDays, formatDayLong, startOfStudioWeek, studioParts } from "../../../lib/studio-time.ts";
 
 const months = ["Jan", "Feb", "Mar", "Apr", "May", "Jun", "Jul", "Aug", "Sep", "Oct", "Nov", "Dec"];
 
@@ -30,4 +30,14 @@ export const payPeriodKindLabels: Record<PayPeriodKind, string> = {
 export function formatWhen(iso: string, timeZone: string): string {
   const at = studioParts(iso, timeZone);
   return `${formatDayLong(at.date)} at ${at.time}`;
+}
+
+/**
+ * The days whose time a period pays: whole workweeks, each paid in the period holding its last
+ * day (docs/payroll-export.md). From the start of the first such workweek to the end of the last.
+ */
+export function paidDays(startDate: string, endDate: string, workweekStartDay: number): { from: string; to: string } {
+  const lastWeekStart = startOfStudioWeek(endDate, workweekStartDay);
+  const to = addDays(lastWeekStart, 6) <= endDate ? endDate : addDays(lastWeekStart, -1);
+  return { from: startOfStudioWeek(startDate, workweekStartDay), to };
 }

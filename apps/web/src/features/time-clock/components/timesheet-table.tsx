@@ -11,6 +11,7 @@ type TimesheetTableProps = {
   timeZone: string;
   /** Leave out for a read-only timesheet. */
   onCorrect?: (entry: TimeEntryDto) => void;
+  emptyMessage?: string;
 };
 
 export const sourceLabels: Record<TimeEntryDto["source"], string> = { clock: "Clock", manual: "Correction" };
@@ -23,7 +24,7 @@ export const entryName = (entry: TimeEntryDto, timeZone: string) =>
     ? formatTimeRange(entry.startedAt, entry.endedAt, timeZone, { withDay: true })
     : `${formatStudioDayTime(entry.startedAt, timeZone)}, still open`;
 
-export function TimesheetTable({ entries, timeZone, onCorrect }: TimesheetTableProps) {
+export function TimesheetTable({ entries, timeZone, onCorrect, emptyMessage = "No time on the clock this week." }: TimesheetTableProps) {
   const columns = useMemo<ColumnDef<TimeEntryDto>[]>(() => {
     const day = (iso: string) => studioParts(iso, timeZone).date;
     const list: ColumnDef<TimeEntryDto>[] = [
@@ -88,7 +89,8 @@ export function TimesheetTable({ entries, timeZone, onCorrect }: TimesheetTableP
       columns={columns}
       getRowId={(e) => String(e.id)}
       initialSorting={[{ id: "date", desc: false }]}
-      emptyMessage="No time on the clock this week."
+      emptyMessage={emptyMessage}
+      pageSize={50}
       hideFilter
     />
   );
