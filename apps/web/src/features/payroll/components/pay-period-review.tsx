@@ -4,8 +4,8 @@ import { formatMoney, overtimeRuleSetLabels, punchRoundingLabels, type PayPeriod
 import { Card } from "../../../components/ui/card.tsx";
 import { cx } from "../../../lib/cx.ts";
 import { formatDayShort } from "../../../lib/studio-time.ts";
-import { flagLabels } from "../../time-clock/components/entry-flags.tsx";
-import { inStudioTime } from "../../time-clock/components/studio-message.ts";
+import { flagLabels } from "../../../components/ui/entry-flags.tsx";
+import { inStudioTime } from "../../../lib/studio-message.ts";
 import { canExportPayroll } from "../../../config/access.ts";
 import { paths } from "../../../config/paths.ts";
 import { ExportDownloads } from "./export-downloads.tsx";

@@ -15,7 +15,7 @@ import { applyApiErrors } from "../../../lib/form-errors.ts";
 import { formatDayShort, formatTimeRange, studioLocalDateTimeToIso, studioParts } from "../../../lib/studio-time.ts";
 import { useSessionsAround } from "../api/get-sessions-around.ts";
 import { useProposeEdit } from "../api/propose-edit.ts";
-import { inStudioTime } from "./studio-message.ts";
+import { inStudioTime } from "../../../lib/studio-message.ts";
 
 type CorrectionDialogProps = {
   open: boolean;

@@ -14,7 +14,7 @@ import { useTimeEntryEdits } from "../api/get-time-entry-edits.ts";
 import { useRejectEdit } from "../api/reject-edit.ts";
 import { EditChange, editDay } from "./edit-change.tsx";
 import { EditStatusBadge } from "./edit-status.tsx";
-import { inStudioTime } from "./studio-message.ts";
+import { inStudioTime } from "../../../lib/studio-message.ts";
 import { Tabs } from "./tabs.tsx";
 import { useWideScreen } from "./use-wide-screen.ts";
 

@@ -12,7 +12,7 @@ import { useEndBreak } from "../api/end-break.ts";
 import { useTimeClock } from "../api/get-time-clock.ts";
 import { useStartBreak } from "../api/start-break.ts";
 import { breakMinutes, formatWorked, workedMinutesSoFar } from "./durations.ts";
-import { inStudioTime } from "./studio-message.ts";
+import { inStudioTime } from "../../../lib/studio-message.ts";
 import { WeekSoFar } from "./week-so-far.tsx";
 
 const SHOP = "shop";

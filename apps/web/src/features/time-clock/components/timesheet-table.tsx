@@ -4,7 +4,7 @@ import { Button } from "../../../components/ui/button.tsx";
 import { DataTable, type ColumnDef } from "../../../components/ui/data-table.tsx";
 import { formatDayShort, formatStudioDayTime, formatStudioTime, formatTimeRange, studioParts } from "../../../lib/studio-time.ts";
 import { breakMinutes, formatWorked } from "./durations.ts";
-import { EntryFlags, flagLabels } from "./entry-flags.tsx";
+import { EntryFlags, flagLabels } from "../../../components/ui/entry-flags.tsx";
 
 type TimesheetTableProps = {
   entries: TimeEntryDto[];

@@ -1,5 +1,5 @@
 import type { TimeEntryDto } from "@takeup/domain";
-import { cx } from "../../../lib/cx.ts";
+import { cx } from "../../lib/cx.ts";
 
 type Flag = TimeEntryDto["flags"][number];
 

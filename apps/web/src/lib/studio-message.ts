@@ -1,4 +1,4 @@
-import { formatStudioDayTime } from "../../../lib/studio-time.ts";
+import { formatStudioDayTime } from "./studio-time.ts";
 
 const isoInstant = /\b\d{4}-\d{2}-\d{2}T\d{2}:\d{2}(?::\d{2}(?:\.\d+)?)?(?:Z|[+-]\d{2}:?\d{2})/g;
 
