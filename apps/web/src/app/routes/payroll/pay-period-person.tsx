@@ -8,7 +8,8 @@ import { formatDecimalHours } from "../../../features/payroll/components/hours.t
 import { formatPeriod, paidDays } from "../../../features/payroll/components/period-format.ts";
 import { useStudio } from "../../../features/studio/api/get-studio.ts";
 import { useTimeEntries } from "../../../features/time-clock/api/get-time-entries.ts";
-import { TimesheetTable } from "../../../features/time-clock/components/timesheet-table.tsx";
+import { TimesheetCards, TimesheetTable } from "../../../features/time-clock/components/timesheet-table.tsx";
+import { useWideScreen } from "../../../features/time-clock/components/use-wide-screen.ts";
 import { ApiError } from "../../../lib/api-client.ts";
 import { formatDayShort } from "../../../lib/studio-time.ts";
 import { NotFoundRoute } from "../not-found.tsx";
@@ -38,6 +39,7 @@ function PersonView({ review, studio, staffUserId }: { review: PayPeriodReviewDt
   const person = review.staff.find((s) => s.staffUserId === staffUserId);
   const days = paidDays(period.startDate, period.endDate, studio.workweekStartDay);
   const entries = useTimeEntries({ ...days, staffUserId });
+  const wide = useWideScreen();
   const label = formatPeriod(period.startDate, period.endDate);
   const name = person?.name ?? entries.data?.[0]?.staffName ?? "Time entries";
   const money = (cents: number) => formatMoney(cents, studio.currency);
@@ -68,7 +70,11 @@ function PersonView({ review, studio, staffUserId }: { review: PayPeriodReviewDt
       ) : entries.isError ? (
         <ErrorState error={entries.error} onRetry={() => void entries.refetch()} />
       ) : (
-        <TimesheetTable entries={entries.data} timeZone={studio.timeZone} emptyMessage="No time entries in this period." />
+        wide ? (
+          <TimesheetTable entries={entries.data} timeZone={studio.timeZone} emptyMessage="No time entries in this period." />
+        ) : (
+          <TimesheetCards entries={entries.data} timeZone={studio.timeZone} emptyMessage="No time entries in this period." />
+        )
       )}
     </>
   );

@@ -32,8 +32,8 @@ describe("MyTimesheet", () => {
     expect(await screen.findByRole("heading", { name: "Week of Mon 7 Dec – Sun 13 Dec 2026" })).toBeInTheDocument();
     const table = within(await screen.findByRole("table", { name: "Time entries" }));
     const [, first, second] = table.getAllByRole("row");
-    expect(cells(first!)).toEqual(["Mon 7 Dec", "09:58", "18:30", "30 min", "8 h 2 min", "Lantern Static — Room A", "Clock", "", "Ask for a correction"]);
-    expect(cells(second!).slice(0, 8)).toEqual(["Tue 8 Dec", "08:00", "14:12", "—", "6 h 12 min", "Shop time", "Clock", "Correction waiting"]);
+    expect(cells(first!)).toEqual(["Mon 7 Dec", "09:58", "18:30", "30 min", "8 h 2 min", "Lantern Static — Room A", "engineer", "Clock", "", "Ask for a correction"]);
+    expect(cells(second!).slice(0, 9)).toEqual(["Tue 8 Dec", "08:00", "14:12", "—", "6 h 12 min", "Shop time", "engineer", "Clock", "Correction waiting"]);
     expect(within(second!).queryByRole("button")).not.toBeInTheDocument();
     expect(screen.getByText(/Worked 14 h 14 min in closed entries/)).toBeInTheDocument();
     expect(calls.find((c) => c.path.startsWith("/api/time-entries"))?.path).toBe("/api/time-entries?from=2026-12-07&to=2026-12-13&staffUserId=u-priya");
@@ -99,7 +99,7 @@ describe("MyTimesheet", () => {
     const { user } = renderWithApp(<MyTimesheet staffUserId="u-priya" timeZone={timeZone} workweekStartDay={1} />, { at: "/timesheet?week=2026-12-07" });
 
     const card = within(await screen.findByRole("list", { name: "Time entries" })).getByRole("listitem");
-    expect(card).toHaveTextContent("Mon 7 Dec8 h 2 min09:58–18:30 · break 30 minLantern Static — Room A · Clock");
+    expect(card).toHaveTextContent("Mon 7 Dec8 h 2 min09:58–18:30 · break 30 minLantern Static — Room A · paid as engineer · Clock");
     expect(screen.queryByRole("table")).not.toBeInTheDocument();
     await user.click(within(card).getByRole("button", { name: "Ask for a correction to Mon 7 Dec 09:58–18:30" }));
     expect(screen.getByRole("dialog", { name: "Ask for a correction" })).toBeInTheDocument();

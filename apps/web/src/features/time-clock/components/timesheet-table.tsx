@@ -55,6 +55,8 @@ export function TimesheetTable({ entries, timeZone, onCorrect, emptyMessage = "N
         accessorFn: entrySession,
         cell: ({ row }) => <span className="block max-w-44 min-w-32 whitespace-normal">{entrySession(row.original)}</span>,
       },
+      // Which of the person's pay rates the entry is paid at (engineer, assistant …).
+      { id: "rate", header: "Paid as", accessorFn: (e) => e.payRateCode },
       { id: "source", header: "Source", accessorFn: (e) => sourceLabels[e.source] },
       {
         id: "flags",
@@ -108,8 +110,8 @@ function CorrectAction({ entry, timeZone, onCorrect }: { entry: TimeEntryDto; ti
 }
 
 /** The same entries as cards, for a phone: everything in a row fits the width, the button included. */
-export function TimesheetCards({ entries, timeZone, onCorrect }: TimesheetTableProps) {
-  if (entries.length === 0) return <p className="rounded-lg border border-line bg-card px-4 py-8 text-center text-sm text-muted">No time on the clock this week.</p>;
+export function TimesheetCards({ entries, timeZone, onCorrect, emptyMessage = "No time on the clock this week." }: TimesheetTableProps) {
+  if (entries.length === 0) return <p className="rounded-lg border border-line bg-card px-4 py-8 text-center text-sm text-muted">{emptyMessage}</p>;
   const sorted = [...entries].sort((a, b) => a.startedAt.localeCompare(b.startedAt));
   return (
     <ul aria-label="Time entries" className="divide-y divide-line rounded-lg border border-line bg-card">
@@ -126,7 +128,7 @@ export function TimesheetCards({ entries, timeZone, onCorrect }: TimesheetTableP
               {breaks > 0 ? ` · break ${formatWorked(breaks)}` : ""}
             </p>
             <p className="text-sm text-muted">
-              {entrySession(entry)} · {sourceLabels[entry.source]}
+              {entrySession(entry)} · paid as {entry.payRateCode} · {sourceLabels[entry.source]}
             </p>
             <EntryFlags flags={entry.flags} />
             {onCorrect ? (
