@@ -28,6 +28,18 @@ const pad = (n: number, width = 2) => String(n).padStart(width, "0");
 
 /** Pure date arithmetic on UTC midnights, so that no zone rule can shift the day. */
 function calendarDayMs(date: string): number {
+  const known = parsedDays.get(date);
+  if (known !== undefined) return known;
+  const ms = parseCalendarDay(date);
+  if (parsedDays.size >= 100_000) parsedDays.clear();
+  parsedDays.set(date, ms);
+  return ms;
+}
+
+/** Dates already parsed: payroll asks about the same few workdays for every entry. */
+const parsedDays = new Map<string, number>();
+
+function parseCalendarDay(date: string): number {
   const match = isoDate.test(date) ? date.split("-").map(Number) : null;
   const [year, month, day] = match ?? [];
   const ms = match ? Date.UTC(year!, month! - 1, day!) : Number.NaN;

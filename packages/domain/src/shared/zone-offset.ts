@@ -10,7 +10,9 @@ import { DateTime } from "luxon";
  */
 const bucketMs = 15 * 60_000;
 const maxCached = 200_000;
-const cache = new Map<string, number>();
+/** Per zone, the offset of each quarter hour seen (keyed by the quarter hour's number since 1970). */
+const cache = new Map<string, Map<number, number>>();
+let cached = 0;
 
 function luxonOffset(ms: number, timeZone: string): number {
   const local = DateTime.fromMillis(ms, { zone: timeZone });
@@ -21,13 +23,18 @@ function luxonOffset(ms: number, timeZone: string): number {
 /** Minutes to add to UTC for local wall time (−360 for Chicago in winter). */
 export function offsetMinutesAt(ms: number, timeZone: string): number {
   const bucket = Math.floor(ms / bucketMs);
-  const key = `${timeZone}|${bucket}`;
-  const known = cache.get(key);
+  let zone = cache.get(timeZone);
+  const known = zone?.get(bucket);
   if (known !== undefined) return known;
   const first = luxonOffset(bucket * bucketMs, timeZone);
   if (luxonOffset((bucket + 1) * bucketMs - 1, timeZone) !== first) return luxonOffset(ms, timeZone);
-  if (cache.size >= maxCached) cache.clear();
-  cache.set(key, first);
+  if (cached >= maxCached) {
+    cache.clear();
+    cached = 0;
+  }
+  if (!zone) cache.set(timeZone, (zone = new Map()));
+  zone.set(bucket, first);
+  cached++;
   return first;
 }
 

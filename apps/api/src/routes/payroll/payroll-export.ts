@@ -152,7 +152,8 @@ export async function writeWorkbook(c: ComputedPeriod, res: Response, timeZone: 
       breaks: trace?.breakMinutes ?? "",
       worked: trace ? hours(trace.workedMinutes) : "",
       rate: e.payRateCode,
-      note: e.note ?? whyUnpaid(e, trace),
+      // The reason it is not paid comes first; the entry's own note follows.
+      note: [whyUnpaid(e, trace), e.note].filter(Boolean).join(" — "),
     }).commit();
   }
   raw.commit();
