@@ -8,6 +8,23 @@ const hours = (minutes: number) => Math.round((minutes / 60) * 100) / 100;
 const dollars = (cents: number) => cents / 100;
 const local = (iso: string | Date | null, zone: string) => (iso ? localDateTime(new Date(iso).getTime(), zone) : "");
 
+/**
+ * Gives every cell of a row its column's one style object. exceljs otherwise merges a fresh
+ * style object into each cell, so its style cache (keyed by the object) never hits and every
+ * cell's style is rendered to XML again just to find its id: on a 100 k-row sheet, the bulk
+ * of the write (docs/benchmarks.md, payroll).
+ */
+function sharedStyles(sheet: ExcelJS.Worksheet): (row: ExcelJS.Row) => ExcelJS.Row {
+  const styles = (sheet.columns ?? []).map((column) => ({ ...(column.style ?? {}) }) as Partial<ExcelJS.Style>);
+  return (row) => {
+    row.eachCell((cell, col) => {
+      const style = styles[col - 1];
+      if (style) cell.style = style;
+    });
+    return row;
+  };
+}
+
 export const summaryColumns = [
   { header: "Staff ID", key: "staffId", width: 34 },
   { header: "Name", key: "name", width: 22 },
@@ -108,10 +125,11 @@ export async function writeWorkbook(c: ComputedPeriod, res: Response, timeZone: 
     { header: "Double-time hours", key: "doubleTime", width: 17, style: { numFmt: "0.00" } },
   ];
   daily.getRow(1).font = { bold: true };
+  const dailyStyled = sharedStyles(daily);
   for (const s of c.summary.staff) {
     for (const w of c.result.workweeks.filter((w) => w.staffId === s.staffId && s.workweekStarts.includes(w.workweekStart))) {
       for (const d of w.days) {
-        daily.addRow({ staffId: s.staffId, name: c.names.get(s.staffId) ?? "", workweekStart: w.workweekStart, date: d.workday, worked: hours(d.workedMinutes), regular: hours(d.regularMinutes), overtime: hours(d.overtimeMinutes), doubleTime: hours(d.doubleTimeMinutes) }).commit();
+        dailyStyled(daily.addRow({ staffId: s.staffId, name: c.names.get(s.staffId) ?? "", workweekStart: w.workweekStart, date: d.workday, worked: hours(d.workedMinutes), regular: hours(d.regularMinutes), overtime: hours(d.overtimeMinutes), doubleTime: hours(d.doubleTimeMinutes) })).commit();
       }
     }
   }
@@ -135,10 +153,11 @@ export async function writeWorkbook(c: ComputedPeriod, res: Response, timeZone: 
     { header: "Note", key: "note", width: 40 },
   ];
   raw.getRow(1).font = { bold: true };
+  const rawStyled = sharedStyles(raw);
   const { entries, traces } = exportedEntries(c);
   for (const e of entries) {
     const trace = traces.get(String(e.id));
-    raw.addRow({
+    rawStyled(raw.addRow({
       id: e.id,
       staffId: e.staffUserId,
       name: e.staffName,
@@ -154,7 +173,7 @@ export async function writeWorkbook(c: ComputedPeriod, res: Response, timeZone: 
       rate: e.payRateCode,
       // The reason it is not paid comes first; the entry's own note follows.
       note: [whyUnpaid(e, trace), e.note].filter(Boolean).join(" — "),
-    }).commit();
+    })).commit();
   }
   raw.commit();
   await workbook.commit();

@@ -128,6 +128,9 @@ describe("locking and exports", () => {
     expect(joRow.getCell(6).value).toBe(jo.overtimeMinutes / 60);
     expect(joRow.getCell(14).value).toBe(jo.grossCents / 100);
     expect(joRow.getCell(9).numFmt).toBe("[h]:mm");
+    // Hours keep their number format on the long sheets too (their cells share one style per column).
+    expect(workbook.getWorksheet("Daily detail")!.getRow(2).getCell(5).numFmt).toBe("0.00");
+    expect(workbook.getWorksheet("Entries")!.getRow(2).getCell(12).numFmt).toBe("0.00");
 
     // read-excel-file answers every sheet as { sheet, data }.
     const sheets = (await readXlsxFile(response.body as Buffer)) as unknown as { sheet: string; data: unknown[][] }[];
