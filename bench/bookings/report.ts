@@ -1,6 +1,5 @@
 // Turns a run's numbers into Markdown: printed to stdout and written into docs/benchmarks.md
 // between this benchmark's markers, so other benchmarks can share the file.
-import { existsSync, readFileSync, writeFileSync } from "node:fs";
 import type { Latency, Plan } from "./measure.ts";
 import type { ApiProfile, Throughput } from "./throughput.ts";
 
@@ -171,28 +170,4 @@ export function renderMarkdown(run: RunInfo): string {
     ...(run.plans ? [planSection(run.plans)] : []),
     ...(run.profile ? [profileSection(run.profile)] : []),
   ].join("\n\n");
-}
-
-const start = "<!-- bench:bookings:start -->";
-const end = "<!-- bench:bookings:end -->";
-const intro = `# Benchmarks
-
-Speed is measured by the scripts in \`bench/\` and recorded here, never by timed assertions in tests. Run them all from the repository root with:
-
-\`\`\`sh
-npm run bench        # every benchmark; rewrites its own section of this file
-npm run bench -- --sizes=10000,100000 --no-doc   # a quicker look that leaves this file alone
-\`\`\`
-
-Each section below is written by its benchmark between its markers; edit the benchmark, not the numbers.
-`;
-
-/** Replaces this benchmark's section of the doc, creating the file or the section as needed. */
-export function writeDoc(file: string, markdown: string) {
-  const section = `${start}\n${markdown}\n${end}`;
-  let text = existsSync(file) ? readFileSync(file, "utf8") : intro;
-  const from = text.indexOf(start);
-  const to = text.indexOf(end);
-  text = from >= 0 && to > from ? text.slice(0, from) + section + text.slice(to + end.length) : `${text.trimEnd()}\n\n${section}\n`;
-  writeFileSync(file, text);
 }

@@ -1,80 +1,39 @@
 // The bookings benchmark: conflict-check and calendar-week latency, and API throughput against a
 // bare baseline, at 10 k, 100 k and 1 M bookings in one growing database. `npm run bench` runs it;
 // so does `npx tsx bench/bookings/run.ts [--sizes=10000,100000] [--iterations=500] [--seconds=10] [--no-doc]`.
-import { mkdtempSync, rmSync } from "node:fs";
 import { spawnSync } from "node:child_process";
-import { createServer } from "node:net";
 import os from "node:os";
 import path from "node:path";
-import { fileURLToPath } from "node:url";
 import type { RowDataPacket } from "mysql2/promise";
 import { createDb } from "@takeup/db";
 import { migrateDatabase } from "@takeup/db/migrate";
 import { seedDemo } from "@takeup/db/seed";
 import { loadActor } from "../../apps/api/src/lib/actor.ts";
+import { benchFlag, benchOption as option, hostMachine, runBenchmark, sayAs, writeDocSection, type BenchContext } from "../lib/bench-run.ts";
 import { createBenchFixtures } from "./fixtures.ts";
 import { BookingLoader } from "./load.ts";
 import { checkCalendarSqlAgrees, explainBookingReads, measureCalendarWeek, measureConflictCheck } from "./measure.ts";
 import { createRandom } from "./random.ts";
-import { renderMarkdown, writeDoc, type RunInfo, type SizeResult } from "./report.ts";
+import { renderMarkdown, type RunInfo, type SizeResult } from "./report.ts";
 import { measureThroughput, profileApi, stopAllTargets } from "./throughput.ts";
 
-const root = fileURLToPath(new URL("../..", import.meta.url));
 const port = 3309;
 
-type MariaDb = { url: string; stop(): Promise<void> };
-type MariaDbHelper = { startMariaDb(options: { dir: string; port: number; database: string }): Promise<MariaDb> };
-
-function option(name: string): string | undefined {
-  const prefix = `--${name}=`;
-  return process.argv.find((a) => a.startsWith(prefix))?.slice(prefix.length);
-}
 const sizes = (option("sizes") ?? "10000,100000,1000000").split(",").map((s) => Number(s.replaceAll("_", "")));
 const iterations = Number(option("iterations") ?? 1000);
 const warmUp = Math.max(50, Math.round(iterations / 10));
 const throughputOptions = { seconds: Number(option("seconds") ?? 10), connections: 10, weeks: 64 };
-const writeTheDoc = !process.argv.includes("--no-doc");
+const writeTheDoc = !benchFlag("no-doc");
 /** For trying a production-sized buffer pool; the recorded run uses the private server as it starts. */
 const bufferPoolMb = option("buffer-pool-mb") === undefined ? null : Number(option("buffer-pool-mb"));
 if (sizes.some((s) => !Number.isInteger(s) || s <= 0) || !(iterations >= 1) || !(throughputOptions.seconds >= 1) || (bufferPoolMb !== null && !(bufferPoolMb >= 128))) {
   throw new Error("usage: run.ts [--sizes=10000,100000,1000000] [--iterations=1000] [--seconds=10] [--buffer-pool-mb=2048] [--no-doc]");
 }
 
-const say = (message: string) => process.stdout.write(`[bench] ${message}\n`);
-
-function portIsFree(p: number): Promise<boolean> {
-  return new Promise((resolve) => {
-    const probe = createServer()
-      .once("error", () => resolve(false))
-      .once("listening", () => probe.close(() => resolve(true)))
-      .listen(p, "127.0.0.1");
-  });
-}
-
-// bench.mjs hands us a temp dir (and removes it whatever happens); run alone, we make our own.
-const dir = process.env.TAKEUP_BENCH_DIR ?? mkdtempSync(path.join(os.tmpdir(), "takeup-bench-"));
-let mariadb: MariaDb | null = null;
-let closePool: (() => Promise<void>) | null = null;
-let cleaned = false;
-
-async function cleanUp() {
-  if (cleaned) return;
-  cleaned = true;
-  await stopAllTargets().catch(() => undefined);
-  await closePool?.().catch(() => undefined);
-  await mariadb?.stop().catch((error: unknown) => say(`could not stop MariaDB: ${String(error)}`));
-  rmSync(dir, { recursive: true, force: true });
-}
-
-for (const signal of ["SIGINT", "SIGTERM"] as const) {
-  process.once(signal, () => {
-    say(`${signal}: stopping`);
-    void cleanUp().finally(() => process.exit(130));
-  });
-}
+const say = sayAs("bench");
 
 /** Only root (over the server's socket) may resize the pool; InnoDB then resizes in the background. */
-async function resizeBufferPool(mb: number) {
+async function resizeBufferPool(dir: string, mb: number) {
   const asRoot = (statement: string) => {
     const result = spawnSync("mariadb", ["--no-defaults", `--socket=${dir}/mysqld.sock`, "-uroot", "-N", "-e", statement], { encoding: "utf8" });
     if (result.status !== 0) throw new Error(`mariadb: ${result.stderr}`);
@@ -91,18 +50,14 @@ async function resizeBufferPool(mb: number) {
   say(`buffer pool now ${Number(asRoot("SELECT @@innodb_buffer_pool_size")) / 2 ** 20} MiB (${resizeStatus() || "no resize status"})`);
 }
 
-async function main() {
+async function main({ dir, startServer, onCleanUp }: BenchContext) {
   const started = performance.now();
-  if (!(await portIsFree(port))) throw new Error(`port ${port} is taken; the bench needs it for its private MariaDB`);
-  // The helper is plain Node (it runs before npm install), so it is loaded untyped and typed here.
-  const helperUrl = new URL("../../scripts/lib/mariadb.mjs", import.meta.url).href;
-  const { startMariaDb } = (await import(helperUrl)) as MariaDbHelper;
-  say(`starting a private MariaDB on port ${port} in ${dir}`);
-  mariadb = await startMariaDb({ dir, port, database: "takeup_bench" });
-  if (bufferPoolMb !== null) await resizeBufferPool(bufferPoolMb);
+  onCleanUp(() => stopAllTargets());
+  const mariadb = await startServer();
+  if (bufferPoolMb !== null) await resizeBufferPool(dir, bufferPoolMb);
   await migrateDatabase(mariadb.url);
   const { db, pool } = createDb(mariadb.url, { connectionLimit: 10 });
-  closePool = () => pool.end();
+  onCleanUp(() => pool.end());
   await seedDemo(db);
   const fixtures = await createBenchFixtures(db);
   const actor = await loadActor(db, fixtures.managerId);
@@ -111,12 +66,8 @@ async function main() {
   const [[server]] = await pool.query<RowDataPacket[]>(
     "SELECT VERSION() AS version, @@innodb_buffer_pool_size AS pool, @@innodb_flush_log_at_trx_commit AS flush, @@innodb_flush_method AS method",
   );
-  const cpus = os.cpus();
   const machine = {
-    cpus: `${cpus.length} × ${cpus[0]?.model.trim() ?? "unknown"}`,
-    memory: `${(os.totalmem() / 2 ** 30).toFixed(1)} GiB`,
-    os: `${os.type()} ${os.release()} (${os.arch()})`,
-    node: process.version,
+    ...hostMachine(),
     mariadb: String(server!.version),
     server: `${bufferPoolMb === null ? "as scripts/lib/mariadb.mjs starts it" : "as scripts/lib/mariadb.mjs starts it, then resized by --buffer-pool-mb"}: innodb_buffer_pool_size ${Number(server!.pool) / 2 ** 20} MiB, innodb_flush_log_at_trx_commit ${server!.flush}, innodb_flush_method ${server!.method}`,
   };
@@ -188,16 +139,9 @@ async function main() {
   const markdown = renderMarkdown(run);
   process.stdout.write(`\n${markdown}\n\n`);
   if (writeTheDoc) {
-    writeDoc(path.join(root, "docs/benchmarks.md"), markdown);
+    writeDocSection("bookings", markdown);
     say("wrote docs/benchmarks.md");
   }
 }
 
-try {
-  await main();
-} catch (error) {
-  process.exitCode = 1;
-  say(`failed: ${error instanceof Error ? (error.stack ?? error.message) : String(error)}`);
-} finally {
-  await cleanUp();
-}
+await runBenchmark({ port, say }, main);

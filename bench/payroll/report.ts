@@ -1,6 +1,5 @@
 // Turns a run's numbers into Markdown: printed to stdout and written into docs/benchmarks.md
 // between this benchmark's markers, beside the other benchmarks' sections.
-import { existsSync, readFileSync, writeFileSync } from "node:fs";
 import { allSeries, count, goalInMiB, median, ruleNames, type PayrollRun, type Series } from "./results.ts";
 import { exportRules, goalMB, goalSeconds, period } from "./scenario.ts";
 
@@ -172,18 +171,4 @@ export function renderMarkdown(run: PayrollRun): string {
     workbookSection(run),
     ...(run.profiles ? ["### Where the time goes", profileTable(run)] : []),
   ].join("\n\n");
-}
-
-const start = "<!-- bench:payroll:start -->";
-const end = "<!-- bench:payroll:end -->";
-
-/** Replaces this benchmark's section of the doc, or adds it at the end. */
-export function writeSection(file: string, markdown: string) {
-  const section = `${start}\n${markdown}\n${end}`;
-  if (!existsSync(file)) throw new Error(`${file} is missing; the bookings benchmark writes its introduction`);
-  let text = readFileSync(file, "utf8");
-  const from = text.indexOf(start);
-  const to = text.indexOf(end);
-  text = from >= 0 && to > from ? text.slice(0, from) + section + text.slice(to + end.length) : `${text.trimEnd()}\n\n${section}\n`;
-  writeFileSync(file, text);
 }

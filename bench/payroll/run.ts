@@ -2,85 +2,43 @@
 // that fortnight from the database, each timed with its peak memory in a fresh process.
 // `npm run bench` runs it; so does
 // `npx tsx bench/payroll/run.ts [--entries=100000] [--per-person=100] [--runs=3] [--no-profile] [--no-doc]`.
-import { mkdirSync, mkdtempSync, rmSync } from "node:fs";
-import { createServer } from "node:net";
+import { mkdirSync } from "node:fs";
 import os from "node:os";
 import path from "node:path";
-import { fileURLToPath } from "node:url";
 import type { RowDataPacket } from "mysql2/promise";
 import { createDb } from "@takeup/db";
 import { migrateDatabase } from "@takeup/db/migrate";
 import { seedDemo } from "@takeup/db/seed";
+import { benchFlag, benchOption as option, hostMachine, runBenchmark, sayAs, writeDocSection, type BenchContext } from "../lib/bench-run.ts";
 import { checkSameTotals } from "./checks.ts";
 import { runCase, stopRunningCases } from "./child.ts";
 import { loadFortnight } from "./load.ts";
 import { profileStep } from "./profile.ts";
-import { renderMarkdown, writeSection } from "./report.ts";
+import { renderMarkdown } from "./report.ts";
 import type { EngineResult, EngineRun, ExportResult, PayrollRun } from "./results.ts";
 import { engineRuleSets, exportRules, period, settingsFor } from "./scenario.ts";
 import { generateFortnight } from "./shifts.ts";
 
-const root = fileURLToPath(new URL("../..", import.meta.url));
 /** Clear of the dev database (3307), the test databases (3308, 3310) and the bookings bench (3309). */
 const port = 3320;
 
-type MariaDb = { url: string; stop(): Promise<void> };
-type MariaDbHelper = { startMariaDb(options: { dir: string; port: number; database: string }): Promise<MariaDb> };
-
-// npm run bench passes the same options to every benchmark, so options meant for another are ignored.
-function option(name: string): string | undefined {
-  const prefix = `--${name}=`;
-  return process.argv.find((a) => a.startsWith(prefix))?.slice(prefix.length);
-}
 const shape = { entries: Number((option("entries") ?? "100000").replaceAll("_", "")), perPerson: Number(option("per-person") ?? 100) };
 const runs = Number(option("runs") ?? 3);
-const profiling = !process.argv.includes("--no-profile");
-const writeTheDoc = !process.argv.includes("--no-doc");
+const profiling = !benchFlag("no-profile");
+const writeTheDoc = !benchFlag("no-doc");
 if (!(shape.entries > 0) || !Number.isInteger(shape.entries / shape.perPerson) || !(runs >= 1)) {
   throw new Error("usage: run.ts [--entries=100000] [--per-person=100 (must divide entries)] [--runs=3] [--no-profile] [--no-doc]");
 }
 
-const say = (message: string) => process.stdout.write(`[bench:payroll] ${message}\n`);
-
-function portIsFree(p: number): Promise<boolean> {
-  return new Promise((resolve) => {
-    const probe = createServer()
-      .once("error", () => resolve(false))
-      .once("listening", () => probe.close(() => resolve(true)))
-      .listen(p, "127.0.0.1");
-  });
-}
-
-// bench.mjs hands us a temp dir (and removes it whatever happens); run alone, we make our own.
-const dir = process.env.TAKEUP_BENCH_DIR ?? mkdtempSync(path.join(os.tmpdir(), "takeup-bench-"));
-let mariadb: MariaDb | null = null;
-let cleaned = false;
-
-async function cleanUp() {
-  if (cleaned) return;
-  cleaned = true;
-  stopRunningCases();
-  await mariadb?.stop().catch((error: unknown) => say(`could not stop MariaDB: ${String(error)}`));
-  rmSync(dir, { recursive: true, force: true });
-}
-
-for (const signal of ["SIGINT", "SIGTERM"] as const) {
-  process.once(signal, () => {
-    say(`${signal}: stopping`);
-    void cleanUp().finally(() => process.exit(130));
-  });
-}
+const say = sayAs("bench:payroll");
 
 const seconds = (s: number) => `${s.toFixed(2)} s`;
 const mib = (m: number) => `${Math.round(m)} MiB`;
 
-async function main() {
+async function main({ dir, startServer, onCleanUp }: BenchContext) {
   const started = performance.now();
-  if (!(await portIsFree(port))) throw new Error(`port ${port} is taken; the bench needs it for its private MariaDB`);
-  const helperUrl = new URL("../../scripts/lib/mariadb.mjs", import.meta.url).href;
-  const { startMariaDb } = (await import(helperUrl)) as MariaDbHelper;
-  say(`starting a private MariaDB on port ${port} in ${dir}`);
-  mariadb = await startMariaDb({ dir, port, database: "takeup_bench" });
+  onCleanUp(stopRunningCases);
+  const mariadb = await startServer();
   await migrateDatabase(mariadb.url);
   const { db, pool } = createDb(mariadb.url);
   let loaded;
@@ -139,14 +97,10 @@ async function main() {
     };
   }
 
-  const cpus = os.cpus();
   const run: PayrollRun = {
     date: new Date().toISOString().replace(/\.\d+Z$/, "Z"),
     machine: {
-      cpus: `${cpus.length} × ${cpus[0]?.model.trim() ?? "unknown"}`,
-      memory: `${(os.totalmem() / 2 ** 30).toFixed(1)} GiB`,
-      os: `${os.type()} ${os.release()} (${os.arch()})`,
-      node: process.version,
+      ...hostMachine(),
       mariadb: serverVersion,
       loadAverages,
     },
@@ -162,16 +116,9 @@ async function main() {
   const markdown = renderMarkdown(run);
   process.stdout.write(`\n${markdown}\n\n`);
   if (writeTheDoc) {
-    writeSection(path.join(root, "docs/benchmarks.md"), markdown);
+    writeDocSection("payroll", markdown);
     say("wrote docs/benchmarks.md");
   }
 }
 
-try {
-  await main();
-} catch (error) {
-  process.exitCode = 1;
-  say(`failed: ${error instanceof Error ? (error.stack ?? error.message) : String(error)}`);
-} finally {
-  await cleanUp();
-}
+await runBenchmark({ port, say }, main);

@@ -3,6 +3,7 @@ import ExcelJS from "exceljs";
 import { desc } from "drizzle-orm";
 import { DateTime } from "luxon";
 import { staffProfiles, timeEntries, timeEntryBreaks } from "@takeup/db";
+import { binaryBody } from "../../test/binary-body.ts";
 import { createTestApp, type TestApp } from "../../test/harness.ts";
 import { demo } from "../../test/demo.ts";
 
@@ -15,12 +16,6 @@ const monday = DateTime.now().setZone(zone).startOf("week").minus({ weeks: 5 });
 const perPerson = 2_100;
 const people = ["Priya Oduya", "Sam Reyes", "Jo Kettering"];
 
-const binary = (res: import("superagent").Response, cb: (err: Error | null, body: unknown) => void) => {
-  const stream = res as unknown as NodeJS.ReadableStream;
-  const chunks: Buffer[] = [];
-  stream.on("data", (c: Buffer) => chunks.push(c));
-  stream.on("end", () => cb(null, Buffer.concat(chunks)));
-};
 
 beforeAll(async () => {
   t = await createTestApp();
@@ -54,7 +49,7 @@ describe("a pay period with thousands of entries", () => {
     expect(count).toBe(people.length * perPerson - 1);
     expect(review.totals.workedMinutes).toBe(people.length * perPerson - 1);
 
-    const response = await books.get(`/api/pay-periods/${period.id}/export?format=xlsx`).buffer(true).parse(binary);
+    const response = await books.get(`/api/pay-periods/${period.id}/export?format=xlsx`).buffer(true).parse(binaryBody);
     const workbook = new ExcelJS.Workbook();
     await workbook.xlsx.load(response.body as ArrayBuffer);
     const entries = workbook.getWorksheet("Entries")!;

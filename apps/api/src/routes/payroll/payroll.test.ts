@@ -2,6 +2,7 @@ import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import ExcelJS from "exceljs";
 import readXlsxFile from "read-excel-file/node";
 import { DateTime } from "luxon";
+import { binaryBody } from "../../test/binary-body.ts";
 import { createTestApp, type TestApp } from "../../test/harness.ts";
 import { demo } from "../../test/demo.ts";
 
@@ -15,13 +16,6 @@ const monday = DateTime.now().setZone(zone).startOf("week").minus({ weeks: 4 });
 let periodId: number;
 let joId: string;
 
-/** Collects a binary response body (supertest buffers text only). */
-const binary = (res: import("superagent").Response, cb: (err: Error | null, body: unknown) => void) => {
-  const stream = res as unknown as NodeJS.ReadableStream;
-  const chunks: Buffer[] = [];
-  stream.on("data", (c: Buffer) => chunks.push(c));
-  stream.on("end", () => cb(null, Buffer.concat(chunks)));
-};
 
 beforeAll(async () => {
   t = await createTestApp();
@@ -113,7 +107,7 @@ describe("locking and exports", () => {
 
   it("exports an XLSX whose figures match the review, read back with exceljs and with read-excel-file", async () => {
     const review = (await books.get(`/api/pay-periods/${periodId}`)).body;
-    const response = await books.get(`/api/pay-periods/${periodId}/export?format=xlsx`).buffer(true).parse(binary);
+    const response = await books.get(`/api/pay-periods/${periodId}/export?format=xlsx`).buffer(true).parse(binaryBody);
     expect(response.status).toBe(200);
     expect(response.headers["content-disposition"]).toContain(`takeup-payroll-${monday.toISODate()}_`);
     const workbook = new ExcelJS.Workbook();

@@ -43,14 +43,19 @@ export function CorrectionsReview({ timeZone }: { timeZone: string }) {
 
 const reasonCell = (edit: TimeEntryEditDto) => <p className="max-w-xs min-w-48 break-words whitespace-normal">{edit.reason}</p>;
 
-function WaitingCorrections({ query, timeZone }: { query: ReturnType<typeof useTimeEntryEdits>; timeZone: string }) {
-  const wide = useWideScreen();
-  const columns = useMemo<ColumnDef<TimeEntryEditDto>[]>(
-    () => [
+/** Who, which day, what would change and why: the columns both lists begin with. */
+const correctionColumns = (timeZone: string): ColumnDef<TimeEntryEditDto>[] => [
       { id: "person", header: "Person", accessorFn: (e) => e.staffName, cell: ({ row }) => <span className="font-medium">{row.original.staffName}</span> },
       { id: "day", header: "Day", accessorFn: (e) => e.proposed.startedAt, cell: ({ row }) => formatDayShort(editDay(row.original, timeZone)) },
       { id: "change", header: "Change", enableSorting: false, cell: ({ row }) => <EditChange edit={row.original} timeZone={timeZone} /> },
       { id: "reason", header: "Reason", enableSorting: false, accessorFn: (e) => e.reason, cell: ({ row }) => reasonCell(row.original) },
+];
+
+function WaitingCorrections({ query, timeZone }: { query: ReturnType<typeof useTimeEntryEdits>; timeZone: string }) {
+  const wide = useWideScreen();
+  const columns = useMemo<ColumnDef<TimeEntryEditDto>[]>(
+    () => [
+      ...correctionColumns(timeZone),
       { id: "asked", header: "Asked", accessorFn: (e) => e.createdAt, cell: ({ row }) => formatStudioDayTime(row.original.createdAt, timeZone) },
       {
         id: "actions",
@@ -93,10 +98,7 @@ function DecidedCorrections({ timeZone }: { timeZone: string }) {
   const all = useTimeEntryEdits();
   const columns = useMemo<ColumnDef<TimeEntryEditDto>[]>(
     () => [
-      { id: "person", header: "Person", accessorFn: (e) => e.staffName, cell: ({ row }) => <span className="font-medium">{row.original.staffName}</span> },
-      { id: "day", header: "Day", accessorFn: (e) => e.proposed.startedAt, cell: ({ row }) => formatDayShort(editDay(row.original, timeZone)) },
-      { id: "change", header: "Change", enableSorting: false, cell: ({ row }) => <EditChange edit={row.original} timeZone={timeZone} /> },
-      { id: "reason", header: "Reason", enableSorting: false, accessorFn: (e) => e.reason, cell: ({ row }) => reasonCell(row.original) },
+      ...correctionColumns(timeZone),
       {
         id: "decision",
         header: "Decision",
