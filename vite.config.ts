@@ -1,6 +1,7 @@
 import { defineConfig } from "vitest/config";
 import react from "@vitejs/plugin-react";
 import tailwindcss from "@tailwindcss/vite";
+import { browserPollIntervalMs, browserWaitMs } from "./tests/support/waits";
 
 const apiPort = Number(process.env.API_PORT ?? 3000);
 
@@ -55,9 +56,11 @@ export default defineConfig({
           environment: "node",
           include: ["**/*.spec.ts"],
           setupFiles: ["../support/fail-on-console-error.ts"],
-          testTimeout: 60000,
+          testTimeout: 120000,
           hookTimeout: 60000,
           fileParallelism: false,
+          // Every expect.poll waits as long as a loaded 2-core machine needs (tests/support/waits.ts).
+          expect: { poll: { timeout: browserWaitMs, interval: browserPollIntervalMs } },
         },
       },
     ],
