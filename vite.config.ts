@@ -47,6 +47,8 @@ export default defineConfig({
           include: ["src/**/*.test.{ts,tsx}"],
           setupFiles: ["./src/test/setup.ts", "../../tests/support/fail-on-console-error.ts"],
           css: false,
+          // Typing into forms in jsdom takes seconds on a loaded 2-core machine; 5 s is not enough.
+          testTimeout: 30000,
         },
       },
       {

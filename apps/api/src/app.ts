@@ -97,7 +97,9 @@ export function createApp({ db, config, mailer, throttle = new SignInThrottle() 
   app.get("/api/openapi.json", (_req, res) => {
     res.json(openApi);
   });
-  for (const router of routers) app.use(router.base, router.toExpress(sessions));
+  // Tests parse every answer against its contract, so a response that drifts fails a test.
+  const checkResponses = config.checkResponses ?? process.env.NODE_ENV === "test";
+  for (const router of routers) app.use(router.base, router.toExpress(sessions, { checkResponses }));
   app.use("/api", notFoundJson);
 
   if (config.webDist && existsSync(path.join(config.webDist, "index.html"))) {

@@ -12,6 +12,8 @@ export type AppConfig = {
   /** The built web app to serve beside /api; absent in API tests and in `npm run dev`. */
   webDist?: string;
   trustProxy: boolean;
+  /** Parse every answer against its route contract (on by default under NODE_ENV=test). */
+  checkResponses?: boolean;
 };
 
 const repoRoot = path.resolve(path.dirname(fileURLToPath(import.meta.url)), "../../..");
