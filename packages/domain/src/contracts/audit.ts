@@ -1,4 +1,5 @@
 import { z } from "zod";
+import { defineRoute } from "./route.ts";
 
 export const auditEventDto = z.object({
   id: z.number(),
@@ -16,3 +17,14 @@ export const auditQuery = z.strictObject({
   entityType: z.string().max(48).optional(),
   limit: z.coerce.number().int().min(1).max(500).default(100),
 });
+
+export const auditRoutes = {
+  list: defineRoute({
+    method: "get",
+    path: "/api/audit-events",
+    summary: "Recent changes: who did what, with before and after",
+    access: ["owner"],
+    query: auditQuery,
+    response: z.array(auditEventDto),
+  }),
+};

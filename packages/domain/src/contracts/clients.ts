@@ -1,5 +1,5 @@
 import { z } from "zod";
-import { emailAddress, idParams, optionalEmail, optionalText, personName } from "./common.ts";
+import { emailAddress, idParams, optionalEmail, optionalText, personName, userIdParams } from "./common.ts";
 import { defineRoute } from "./route.ts";
 import { pendingInvitationDto } from "./staff.ts";
 
@@ -75,7 +75,7 @@ export type InviteClientUserInput = z.infer<typeof inviteClientUserInput>;
 
 export const updateClientUserInput = z.strictObject({ active: z.boolean() });
 
-export const clientUserParams = idParams.extend({ userId: z.string().min(1).max(36) });
+export const clientUserParams = idParams.extend(userIdParams.shape);
 
 const staffWhoBook = ["owner", "manager"] as const;
 
