@@ -14,6 +14,17 @@ export default tseslint.config(
     },
   },
   {
+    // One way to a database handle: createDb() retries deadlocked transactions (decision 010).
+    files: ["apps/**/*.{ts,tsx}", "packages/**/*.ts"],
+    ignores: ["packages/db/src/client.ts"],
+    rules: {
+      "no-restricted-imports": [
+        "error",
+        { paths: [{ name: "drizzle-orm/mysql2", importNames: ["drizzle"], message: "Use createDb() from @takeup/db: it retries transactions InnoDB gives up on (decision 010)." }] },
+      ],
+    },
+  },
+  {
     files: ["scripts/**/*.mjs"],
     languageOptions: { globals: { process: "readonly", console: "readonly", URL: "readonly", fetch: "readonly", setTimeout: "readonly" } },
   },

@@ -7,7 +7,9 @@ import { loadStudio } from "./routes/studio/studio.service.ts";
 import { startScheduler } from "./lib/scheduler.ts";
 
 const { config, databaseUrl, port } = readConfig();
-const { db, pool } = createDb(databaseUrl);
+const { db, pool } = createDb(databaseUrl, {
+  writeRetry: { onRetry: ({ attempt, errno, delayMs }) => logger.warn("transaction retried", { attempt, errno, delayMs }) },
+});
 const mailer = createMailer(db, config.smtpUrl, config.mailFrom, async () => (await loadStudio(db)).name);
 const app = createApp({ db, config, mailer });
 
