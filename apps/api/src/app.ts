@@ -130,6 +130,10 @@ export function createApp({ db, config, mailer, throttle = new SignInThrottle() 
 
   if (config.webDist && existsSync(path.join(config.webDist, "index.html"))) {
     const indexHtml = path.join(config.webDist, "index.html");
+    // The build makes no source maps (vite.config.ts); should one appear in dist, it still stays private.
+    app.get(/\.map$/i, () => {
+      throw new HttpError(404, "not_found", "No such file");
+    });
     app.use("/assets", express.static(path.join(config.webDist, "assets"), { immutable: true, maxAge: "1y" }));
     app.use(express.static(config.webDist, { index: false }));
     // "/{*splat}" also matches "/" itself, which "/*splat" does not in Express 5.
