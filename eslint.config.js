@@ -25,6 +25,18 @@ export default tseslint.config(
     },
   },
   {
+    // Every export writes its rows through lib/spreadsheet.ts, which neutralises formulas (OWASP CSV injection).
+    files: ["apps/api/src/**/*.ts"],
+    ignores: ["**/*.test.ts"],
+    rules: {
+      "no-restricted-syntax": [
+        "error",
+        { selector: "CallExpression[callee.property.name='addRow']", message: "Use addSafeRow() from lib/spreadsheet.ts: it keeps names from becoming formulas." },
+        { selector: "CallExpression[callee.property.name='addRows']", message: "Use addSafeRow() from lib/spreadsheet.ts: it keeps names from becoming formulas." },
+      ],
+    },
+  },
+  {
     files: ["scripts/**/*.mjs"],
     languageOptions: { globals: { process: "readonly", console: "readonly", URL: "readonly", fetch: "readonly", setTimeout: "readonly" } },
   },
