@@ -9,7 +9,8 @@ const apiPort = Number(process.env.API_PORT ?? 3000);
 export default defineConfig({
   root: "apps/web",
   plugins: [react(), tailwindcss()],
-  build: { outDir: "dist", emptyOutDir: true, sourcemap: true, chunkSizeWarningLimit: 900 },
+  // No source maps in the production build: the API serves dist/ to anyone (decision 002).
+  build: { outDir: "dist", emptyOutDir: true, sourcemap: false, chunkSizeWarningLimit: 900 },
   server: {
     port: 5173,
     proxy: { "/api": { target: `http://127.0.0.1:${apiPort}`, changeOrigin: false } },

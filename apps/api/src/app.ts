@@ -13,6 +13,7 @@ import { buildOpenApi } from "./lib/openapi.ts";
 import { createSessionReader } from "./lib/session.ts";
 import { SignInThrottle } from "./lib/sign-in-throttle.ts";
 import { HttpError } from "./lib/http-error.ts";
+import { databaseProbe, retryAfterSeconds } from "./lib/database-probe.ts";
 import { errorHandler, notFoundJson } from "./middleware/error-handler.ts";
 import { sameOrigin } from "./middleware/same-origin.ts";
 import { auditRouter } from "./routes/audit/audit.router.ts";
@@ -68,12 +69,25 @@ export function apiRouters(deps: Deps) {
 // better-auth endpoints our own routes stand in front of (throttled sign-in; no self sign-up).
 const closedAuthPaths = ["/api/auth/sign-in/email", "/api/auth/sign-up/email"];
 
+/** A path whose percent-encoding does not decode (`/api/clients/%`, `/assets/%`) is a 400, on every route. */
+const refuseUndecodablePaths: express.RequestHandler = (req, _res, next) => {
+  try {
+    decodeURIComponent(req.path);
+  } catch {
+    throw new HttpError(400, "bad_path", "The address has a broken %-escape", [
+      { field: "(path)", rule: "percent_encoding", message: "Write % as %25" },
+    ]);
+  }
+  next();
+};
+
 /** Builds the app without listening: server.ts listens, tests drive it with supertest. */
 export function createApp({ db, config, mailer, throttle = new SignInThrottle() }: AppDeps) {
   const auth = createAuth(db, config, mailer);
   const deps: Deps = { db, config, mailer, auth, throttle };
   const sessions = createSessionReader(auth, db);
   const routers = apiRouters(deps);
+  const databaseReachable = databaseProbe(db);
   const openApi = buildOpenApi(routers.flatMap((r) => r.routes));
 
   const app = express();
@@ -87,12 +101,26 @@ export function createApp({ db, config, mailer, throttle = new SignInThrottle() 
       strictTransportSecurity: config.appUrl.startsWith("https://"),
     }),
   );
+  app.use(refuseUndecodablePaths);
   app.use("/api", sameOrigin([config.appUrl]));
   app.all(closedAuthPaths, () => {
     throw new HttpError(404, "not_found", "Sign in through /api/session");
   });
   // better-auth reads its own request bodies, so it is mounted before express.json().
-  app.all("/api/auth/*splat", toNodeHandler(auth));
+  app.all(
+    "/api/auth/*splat",
+    toNodeHandler({
+      // better-auth answers a failed query with its own 500; with the database away that is a 503.
+      handler: async (request: Request) => {
+        const response = await auth.handler(request);
+        if (response.status < 500 || (await databaseReachable())) return response;
+        return Response.json(
+          { error: { code: "database_unavailable", message: "The studio's database cannot be reached just now; try again in a few seconds" } },
+          { status: 503, headers: { "retry-after": String(retryAfterSeconds.unavailable) } },
+        );
+      },
+    }),
+  );
   app.use("/api", express.json({ limit: "200kb" }));
   app.get("/api/openapi.json", (_req, res) => {
     res.json(openApi);
@@ -104,6 +132,10 @@ export function createApp({ db, config, mailer, throttle = new SignInThrottle() 
 
   if (config.webDist && existsSync(path.join(config.webDist, "index.html"))) {
     const indexHtml = path.join(config.webDist, "index.html");
+    // The build makes no source maps (vite.config.ts); should one appear in dist, it still stays private.
+    app.get(/\.map$/i, () => {
+      throw new HttpError(404, "not_found", "No such file");
+    });
     app.use("/assets", express.static(path.join(config.webDist, "assets"), { immutable: true, maxAge: "1y" }));
     app.use(express.static(config.webDist, { index: false }));
     // "/{*splat}" also matches "/" itself, which "/*splat" does not in Express 5.
@@ -113,6 +145,6 @@ export function createApp({ db, config, mailer, throttle = new SignInThrottle() 
     });
   }
 
-  app.use(errorHandler(logger));
+  app.use(errorHandler(logger, databaseReachable));
   return Object.assign(app, { routes: routers.flatMap((r) => r.routes), auth });
 }

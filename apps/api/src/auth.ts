@@ -3,6 +3,7 @@ import { drizzleAdapter } from "better-auth/adapters/drizzle";
 import { account, session, user, verification, type Db } from "@takeup/db";
 import type { AppConfig } from "./config.ts";
 import { loadActor } from "./lib/actor.ts";
+import { logger } from "./lib/logger.ts";
 import type { Mailer } from "./lib/mailer.ts";
 import { passwordResetEmail } from "./emails/password-reset.ts";
 import { loadStudio } from "./routes/studio/studio.service.ts";
@@ -15,6 +16,11 @@ export function createAuth(db: Db, config: AppConfig, mailer: Mailer) {
     secret: config.authSecret,
     database: drizzleAdapter(db, { provider: "mysql", schema: { user, session, account, verification } }),
     telemetry: { enabled: false },
+    // Its messages join ours as one-line JSON (a failed query during a database outage, say).
+    logger: {
+      level: "warn",
+      log: (level, message, ...args) => (level === "error" ? logger.error : logger.warn)(`better-auth: ${message}`, { details: args.map(String) }),
+    },
     trustedOrigins: [config.appUrl],
     emailAndPassword: {
       enabled: true,

@@ -3,7 +3,7 @@ import { z } from "zod";
 import type { Access, RouteContract } from "@takeup/domain";
 import { requireRole } from "../middleware/require-role.ts";
 import type { Actor } from "./actor.ts";
-import { HttpError } from "./http-error.ts";
+import { HttpError, type ErrorDetail } from "./http-error.ts";
 import type { SessionReader } from "./session.ts";
 
 type Method = RouteContract["method"];
@@ -80,6 +80,7 @@ export class ApiRouter {
     const router = Router();
     for (const spec of this.routes) {
       router[spec.method](spec.path, requireRole(sessions, spec.access), async (req, res) => {
+        refuseUnpairedSurrogates({ ...req.params }, req.query, req.body);
         const ctx = {
           req,
           res,
@@ -113,5 +114,42 @@ function assertAnswerKeepsContract(spec: RegisteredRoute, result: unknown) {
   if (!parsed.success) {
     const problems = parsed.error.issues.map((i) => `${i.path.join(".") || "(body)"}: ${i.message}`).join("; ");
     throw new HttpError(500, "contract_drift", `${spec.method.toUpperCase()} ${spec.fullPath} broke its response contract: ${problems}`);
+  }
+}
+
+const unpairedSurrogate = /[\uD800-\uDBFF](?![\uDC00-\uDFFF])|(?<![\uD800-\uDBFF])[\uDC00-\uDFFF]/;
+// No contract nests deeper than a few levels; this also keeps the walk's recursion shallow.
+const maxDepth = 32;
+
+/**
+ * JSON may carry "\ud800", half of a UTF-16 pair: not text, and MariaDB's utf8mb4 cannot store it
+ * (the driver would quietly write U+FFFD). One check for every route, before any schema runs.
+ */
+function refuseUnpairedSurrogates(...inputs: unknown[]) {
+  const details: ErrorDetail[] = [];
+  const visit = (value: unknown, path: string[]) => {
+    if (details.length >= 20) return;
+    if (path.length > maxDepth) {
+      details.push({ field: path.slice(0, 3).join(".") + "…", rule: "too_deep", message: `Nest at most ${maxDepth} levels` });
+    } else if (typeof value === "string") {
+      if (unpairedSurrogate.test(value)) {
+        details.push({
+          field: path.join(".") || "(body)",
+          rule: "unpaired_surrogate",
+          message: "Contains half of a UTF-16 character pair, which is not valid text",
+        });
+      }
+    } else if (Array.isArray(value)) {
+      value.forEach((item, i) => visit(item, [...path, String(i)]));
+    } else if (value && typeof value === "object") {
+      for (const [key, item] of Object.entries(value)) {
+        visit(key, path);
+        visit(item, [...path, key]);
+      }
+    }
+  };
+  for (const input of inputs) visit(input, []);
+  if (details.length > 0) {
+    throw new HttpError(400, "invalid_input", `Check the request: ${details.map((d) => `${d.field}: ${d.message}`).join("; ")}`, details);
   }
 }
