@@ -2,7 +2,6 @@ import path from "node:path";
 import { existsSync } from "node:fs";
 import express from "express";
 import helmet from "helmet";
-import { toNodeHandler } from "better-auth/node";
 import type { Db } from "@takeup/db";
 import type { AppConfig } from "./config.ts";
 import { createAuth } from "./auth.ts";
@@ -12,7 +11,6 @@ import { logger } from "./lib/logger.ts";
 import { buildOpenApi } from "./lib/openapi.ts";
 import { createSessionReader } from "./lib/session.ts";
 import { SignInThrottle } from "./lib/sign-in-throttle.ts";
-import { HttpError } from "./lib/http-error.ts";
 import { errorHandler, notFoundJson } from "./middleware/error-handler.ts";
 import { sameOrigin } from "./middleware/same-origin.ts";
 import { auditRouter } from "./routes/audit/audit.router.ts";
@@ -65,9 +63,6 @@ export function apiRouters(deps: Deps) {
   ];
 }
 
-// better-auth endpoints our own routes stand in front of (throttled sign-in; no self sign-up).
-const closedAuthPaths = ["/api/auth/sign-in/email", "/api/auth/sign-up/email"];
-
 /** Builds the app without listening: server.ts listens, tests drive it with supertest. */
 export function createApp({ db, config, mailer, throttle = new SignInThrottle() }: AppDeps) {
   const auth = createAuth(db, config, mailer);
@@ -88,11 +83,8 @@ export function createApp({ db, config, mailer, throttle = new SignInThrottle() 
     }),
   );
   app.use("/api", sameOrigin([config.appUrl]));
-  app.all(closedAuthPaths, () => {
-    throw new HttpError(404, "not_found", "Sign in through /api/session");
-  });
-  // better-auth reads its own request bodies, so it is mounted before express.json().
-  app.all("/api/auth/*splat", toNodeHandler(auth));
+  // better-auth's own HTTP handler is not mounted at all (decision 008): our routes call auth.api.*,
+  // so no spelling of a path can reach one of its endpoints past our throttle and limits.
   app.use("/api", express.json({ limit: "200kb" }));
   app.get("/api/openapi.json", (_req, res) => {
     res.json(openApi);

@@ -24,8 +24,10 @@ export function createAuth(db: Db, config: AppConfig, mailer: Mailer) {
       maxPasswordLength: 128,
       revokeSessionsOnPasswordReset: true,
       resetPasswordTokenExpiresIn: 60 * 60,
-      sendResetPassword: async ({ user: recipient, url }) => {
+      // The link goes straight to our reset page: better-auth's own /api/auth handler is not mounted.
+      sendResetPassword: async ({ user: recipient, token }) => {
         const studio = await loadStudio(db);
+        const url = `${config.appUrl}/reset-password?token=${encodeURIComponent(token)}`;
         await mailer.send(passwordResetEmail({ studioName: studio.name, to: recipient.email, name: recipient.name, url }));
       },
     },

@@ -9,18 +9,12 @@ beforeAll(async () => {
 afterAll(() => t.close());
 
 describe("password reset by e-mail", () => {
-  it("mails a one-hour link that lands on our reset page and sets a new password", async () => {
+  it("mails a one-hour link that opens our reset page and sets a new password", async () => {
     const requested = await t.client().post("/api/session/password-reset-requests").send({ email: demo.bookkeeper });
     expect(requested.status).toBe(202);
     const [message] = t.mailTo(demo.bookkeeper);
     expect(message!.subject).toBe("Reset your Wrenfield Sound password");
-    const link = linkIn(message!, "/api/auth/reset-password/");
-
-    const landing = await t.client().get(link.replace(t.config.appUrl, ""));
-    expect(landing.status).toBe(302);
-    const target = new URL(landing.headers.location!, t.config.appUrl);
-    expect(target.pathname).toBe("/reset-password");
-    const token = target.searchParams.get("token")!;
+    const token = new URL(linkIn(message!, "/reset-password")).searchParams.get("token")!;
 
     const reset = await t.client().post("/api/session/password-resets").send({ token, password: "a-brand-new-password" });
     expect(reset.status).toBe(200);
