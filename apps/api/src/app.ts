@@ -37,7 +37,7 @@ export function apiRouters(deps: Deps) {
   return [
     healthRouter(deps),
     sessionRouter(deps),
-    meRouter(),
+    meRouter(deps),
     invitationsRouter(deps),
     studioRouter(deps),
     staffRouter(deps),

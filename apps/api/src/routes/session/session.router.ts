@@ -1,12 +1,13 @@
 import type { Response } from "express";
 import { fromNodeHeaders } from "better-auth/node";
-import { meDto, okDto, passwordResetInput, passwordResetRequestInput, signInInput } from "@takeup/domain";
+import { meDto, okDto, passwordResetInput, passwordResetRequestInput, signInInput, updateMeInput } from "@takeup/domain";
 import { ApiRouter } from "../../lib/api-router.ts";
 import { fromAuthError } from "../../lib/better-auth-errors.ts";
 import type { Actor } from "../../lib/actor.ts";
 import type { Deps } from "../../deps.ts";
 import { HttpError } from "../../lib/http-error.ts";
 import { loadActor } from "../../lib/actor.ts";
+import { updateOwnProfile } from "./profile.service.ts";
 
 export const toMe = (actor: Actor) => ({
   id: actor.userId,
@@ -99,13 +100,23 @@ export function sessionRouter({ db, auth, config, throttle }: Deps) {
     });
 }
 
-export function meRouter() {
-  return new ApiRouter("/api/me", "Session").route({
-    method: "get",
-    path: "/",
-    summary: "The signed-in user and their role",
-    access: "signed-in",
-    response: meDto,
-    handler: async ({ actor }) => toMe(actor),
-  });
+export function meRouter({ db }: Pick<Deps, "db">) {
+  return new ApiRouter("/api/me", "Session")
+    .route({
+      method: "get",
+      path: "/",
+      summary: "The signed-in user and their role",
+      access: "signed-in",
+      response: meDto,
+      handler: async ({ actor }) => toMe(actor),
+    })
+    .route({
+      method: "patch",
+      path: "/",
+      summary: "Change one's own name (plain text, 1–100 characters; audited)",
+      access: "signed-in",
+      body: updateMeInput,
+      response: meDto,
+      handler: async ({ actor, body }) => toMe(await updateOwnProfile(db, actor, body)),
+    });
 }
