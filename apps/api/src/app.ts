@@ -10,7 +10,7 @@ import type { Mailer } from "./lib/mailer.ts";
 import { logger } from "./lib/logger.ts";
 import { buildOpenApi } from "./lib/openapi.ts";
 import { createSessionReader } from "./lib/session.ts";
-import { SignInThrottle } from "./lib/sign-in-throttle.ts";
+import { SignInThrottle, type ThrottlePolicy } from "./lib/sign-in-throttle.ts";
 import { errorHandler, notFoundJson } from "./middleware/error-handler.ts";
 import { sameOrigin } from "./middleware/same-origin.ts";
 import { auditRouter } from "./routes/audit/audit.router.ts";
@@ -30,7 +30,7 @@ import { calendarFeedsRouter, feedsRouter } from "./routes/calendar-feeds/calend
 import { timeClockRouter, timeEditsRouter, timeEntriesRouter } from "./routes/time-clock/time-clock.router.ts";
 import { payPeriodsRouter, payRatesRouter, payrollSettingsRouter } from "./routes/payroll/payroll.router.ts";
 
-export type AppDeps = { db: Db; config: AppConfig; mailer: Mailer; throttle?: SignInThrottle };
+export type AppDeps = { db: Db; config: AppConfig; mailer: Mailer; throttlePolicy?: Partial<ThrottlePolicy> };
 
 /** Every API router, in mount order; the OpenAPI document and the access tests read this list. */
 export function apiRouters(deps: Deps) {
@@ -64,7 +64,8 @@ export function apiRouters(deps: Deps) {
 }
 
 /** Builds the app without listening: server.ts listens, tests drive it with supertest. */
-export function createApp({ db, config, mailer, throttle = new SignInThrottle() }: AppDeps) {
+export function createApp({ db, config, mailer, throttlePolicy }: AppDeps) {
+  const throttle = new SignInThrottle(db, throttlePolicy);
   const auth = createAuth(db, config, mailer);
   const deps: Deps = { db, config, mailer, auth, throttle };
   const sessions = createSessionReader(auth, db);

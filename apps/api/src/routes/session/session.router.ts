@@ -34,7 +34,7 @@ export function sessionRouter({ db, auth, config, throttle }: Deps) {
       response: meDto,
       handler: async ({ req, res, body }) => {
         const address = req.ip ?? "unknown";
-        throttle.assertAllowed(address, body.email);
+        await throttle.assertSignInAllowed(address, body.email);
         let result;
         try {
           result = await auth.api.signInEmail({
@@ -43,10 +43,10 @@ export function sessionRouter({ db, auth, config, throttle }: Deps) {
             returnHeaders: true,
           });
         } catch (error) {
-          throttle.recordFailure(address, body.email);
+          await throttle.recordSignInFailure(address, body.email);
           fromAuthError(error, { code: "invalid_credentials", message: "That e-mail and password do not match" });
         }
-        throttle.recordSuccess(body.email);
+        await throttle.recordSignInSuccess(address, body.email);
         const actor = await loadActor(db, result.response.user.id);
         if (!actor) throw new HttpError(403, "no_role", "This sign-in has no role at the studio");
         forwardCookies(res, result.headers);
