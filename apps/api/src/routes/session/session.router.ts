@@ -8,6 +8,7 @@ import type { Deps } from "../../deps.ts";
 import { HttpError } from "../../lib/http-error.ts";
 import { loadActor } from "../../lib/actor.ts";
 import { updateOwnProfile } from "./profile.service.ts";
+import { afterResponse } from "../../lib/after-response.ts";
 
 export const toMe = (actor: Actor) => ({
   id: actor.userId,
@@ -72,13 +73,21 @@ export function sessionRouter({ db, auth, config, throttle }: Deps) {
     .route({
       method: "post",
       path: "/password-reset-requests",
-      summary: "E-mail a password-reset link (answers the same whether or not the address is known)",
+      summary: "E-mail a password-reset link (answers the same whether or not the address is known; 429 past 10 requests from one address in 15 minutes)",
       access: "public",
       body: passwordResetRequestInput,
       status: 202,
       response: okDto,
-      handler: async ({ body }) => {
-        await auth.api.requestPasswordReset({ body: { email: body.email, redirectTo: `${config.appUrl}/reset-password` } });
+      handler: async ({ req, res, body }) => {
+        // The same work before answering whether or not the address is known: the throttles are
+        // counted per client address and per e-mail address alike. Looking the account up,
+        // writing the token and sending the e-mail happen after the answer has gone (decision 009).
+        await throttle.assertResetRequestAllowed(req.ip ?? "unknown");
+        if (await throttle.takeResetEmail(body.email)) {
+          afterResponse(res, "password reset e-mail", async () => {
+            await auth.api.requestPasswordReset({ body: { email: body.email, redirectTo: `${config.appUrl}/reset-password` } });
+          });
+        }
         return { ok: true };
       },
     })
