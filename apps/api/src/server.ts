@@ -5,6 +5,7 @@ import { createMailer } from "./lib/mailer.ts";
 import { logger } from "./lib/logger.ts";
 import { loadStudio } from "./routes/studio/studio.service.ts";
 import { startScheduler } from "./lib/scheduler.ts";
+import { settleAfterResponseWork } from "./lib/after-response.ts";
 
 const { config, databaseUrl, port, host } = readConfig();
 const { db, pool } = createDb(databaseUrl, {
@@ -24,6 +25,8 @@ async function shutdown(signal: string) {
   stopScheduler();
   server.close();
   server.closeAllConnections();
+  // E-mails owed to requests already answered (password resets) go out before the pool closes.
+  await settleAfterResponseWork();
   mailer.close();
   await pool.end();
   process.exit(0);

@@ -5,6 +5,8 @@ export const auditEventDto = z.object({
   id: z.number(),
   at: z.string(),
   actorName: z.string().nullable(),
+  /** Set when the actor is a client user: the client account they belong to, shown beside their name. */
+  actorClientAccountName: z.string().nullable(),
   action: z.string(),
   entityType: z.string(),
   entityId: z.string(),
