@@ -42,6 +42,7 @@ export { formatIsoWeek, isoWeek, type IsoWeekDate } from "./payroll/iso-week.ts"
 export type * from "./payroll/types.ts";
 export * from "./contracts/rooms.ts";
 export * from "./contracts/bookings.ts";
+export * from "./contracts/projects.ts";
 export * from "./shared/format-time.ts";
 export { rateCardFromVersion, type RateCardVersionFields } from "./pricing/from-version.ts";
 export * from "./payroll/settings-catalogue.ts";

@@ -154,3 +154,49 @@ export const equipmentRoutes = {
     response: equipmentDto,
   }),
 };
+
+export const roomRoutes = {
+  list: defineRoute({
+    method: "get",
+    path: "/api/rooms",
+    summary: "Every room, with the rate card in force now",
+    access: "signed-in",
+    response: z.array(roomDto),
+  }),
+  create: defineRoute({
+    method: "post",
+    path: "/api/rooms",
+    summary: "Add a room",
+    access: ["owner"],
+    body: createRoomInput,
+    status: 201,
+    response: roomDto,
+  }),
+  update: defineRoute({
+    method: "patch",
+    path: "/api/rooms/:id",
+    summary: "Change a room (name, colour, turnover, order, active)",
+    access: ["owner"],
+    params: idParams,
+    body: updateRoomInput,
+    response: roomDto,
+  }),
+  rateCards: defineRoute({
+    method: "get",
+    path: "/api/rooms/:id/rate-cards",
+    summary: "A room's rate-card versions, newest first",
+    access: ["owner", "manager", "bookkeeper"],
+    params: idParams,
+    response: z.array(rateCardVersionDto),
+  }),
+  addRateCard: defineRoute({
+    method: "post",
+    path: "/api/rooms/:id/rate-cards",
+    summary: "Add a new rate-card version; bookings keep the version they were quoted on",
+    access: ["owner"],
+    params: idParams,
+    body: createRateCardVersionInput,
+    status: 201,
+    response: rateCardVersionDto,
+  }),
+};

@@ -1,7 +1,6 @@
 import { and, asc, eq } from "drizzle-orm";
-import { z } from "zod";
 import { clientAccounts, projects } from "@takeup/db";
-import { createProjectInput, idParams, projectDto } from "@takeup/domain";
+import { projectRoutes } from "@takeup/domain";
 import { ApiRouter } from "../../lib/api-router.ts";
 import { assertClientScope } from "../../lib/client-scope.ts";
 import { notFound } from "../../lib/http-error.ts";
@@ -13,35 +12,18 @@ export function projectsRouter({ db }: Deps) {
   const list = (clientAccountId: number) =>
     db.select().from(projects).where(eq(projects.clientAccountId, clientAccountId)).orderBy(asc(projects.name));
   return new ApiRouter("/api/clients", "Clients")
-    .route({
-      method: "get",
-      path: "/:id/projects",
-      summary: "A client's projects (a client sees only its own)",
-      access: ["owner", "manager", "bookkeeper", "engineer", "client"],
-      params: idParams,
-      response: z.array(projectDto),
-      handler: async ({ actor, params }) => {
-        assertClientScope(actor, params.id);
-        return list(params.id);
-      },
+    .handle(projectRoutes.list, async ({ actor, params }) => {
+      assertClientScope(actor, params.id);
+      return list(params.id);
     })
-    .route({
-      method: "post",
-      path: "/:id/projects",
-      summary: "Add a project (album, EP, single) for a client",
-      access: ["owner", "manager"],
-      params: idParams,
-      body: createProjectInput,
-      status: 201,
-      response: projectDto,
-      handler: async ({ actor, params, body }) =>
-        db.transaction(async (tx) => {
-          const [account] = await tx.select({ id: clientAccounts.id }).from(clientAccounts).where(eq(clientAccounts.id, params.id));
-          if (!account) throw notFound("That client account");
-          const [created] = await tx.insert(projects).values({ clientAccountId: params.id, name: body.name, notes: body.notes?.trim() || null }).$returningId();
-          await writeAudit(tx, actor, "project.created", { type: "project", id: created!.id }, { after: { clientAccountId: params.id, ...body } });
-          const [row] = await tx.select().from(projects).where(and(eq(projects.id, created!.id)));
-          return row!;
-        }),
-    });
+    .handle(projectRoutes.create, async ({ actor, params, body }) =>
+      db.transaction(async (tx) => {
+        const [account] = await tx.select({ id: clientAccounts.id }).from(clientAccounts).where(eq(clientAccounts.id, params.id));
+        if (!account) throw notFound("That client account");
+        const [created] = await tx.insert(projects).values({ clientAccountId: params.id, name: body.name, notes: body.notes?.trim() || null }).$returningId();
+        await writeAudit(tx, actor, "project.created", { type: "project", id: created!.id }, { after: { clientAccountId: params.id, ...body } });
+        const [row] = await tx.select().from(projects).where(and(eq(projects.id, created!.id)));
+        return row!;
+      }),
+    );
 }

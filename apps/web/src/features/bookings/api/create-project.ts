@@ -1,9 +1,10 @@
 import { useMutation, useQueryClient } from "@tanstack/react-query";
-import { projectDto, type CreateProjectInput } from "@takeup/domain";
-import { api } from "../../../lib/api-client.ts";
+import { projectRoutes, type CreateProjectInput } from "@takeup/domain";
+import { callApi } from "../../../lib/api-client.ts";
 import { projectKeys } from "./booking-keys.ts";
 
-export const createProject = (clientId: number, input: CreateProjectInput) => api.post(`/api/clients/${clientId}/projects`, input, projectDto);
+export const createProject = (clientId: number, input: CreateProjectInput) => 
+  callApi(projectRoutes.create, { params: { id: clientId }, body: input });
 
 export function useCreateProject(clientId: number) {
   const queryClient = useQueryClient();

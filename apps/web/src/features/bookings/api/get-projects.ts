@@ -1,10 +1,10 @@
 import { queryOptions, useQuery } from "@tanstack/react-query";
-import { z } from "zod";
-import { projectDto } from "@takeup/domain";
-import { api } from "../../../lib/api-client.ts";
+import { projectRoutes } from "@takeup/domain";
+import { callApi } from "../../../lib/api-client.ts";
 import { projectKeys } from "./booking-keys.ts";
 
-export const getProjects = (clientId: number, signal?: AbortSignal) => api.get(`/api/clients/${clientId}/projects`, z.array(projectDto), signal);
+export const getProjects = (clientId: number, signal?: AbortSignal) => 
+  callApi(projectRoutes.list, { params: { id: clientId }, signal });
 
 export const projectsQueryOptions = (clientId: number) =>
   queryOptions({ queryKey: projectKeys.list(clientId), queryFn: ({ signal }) => getProjects(clientId, signal) });

@@ -1,11 +1,11 @@
 import { useMutation, useQueryClient } from "@tanstack/react-query";
-import { rateCardVersionDto, type CreateRateCardVersionInput } from "@takeup/domain";
-import { api } from "../../../lib/api-client.ts";
+import { roomRoutes, type CreateRateCardVersionInput } from "@takeup/domain";
+import { callApi } from "../../../lib/api-client.ts";
 import { roomKeys } from "./room-keys.ts";
 
 /** Adds a new version; bookings already quoted keep the version they were quoted on. */
 export const createRateCard = (roomId: number, input: CreateRateCardVersionInput) =>
-  api.post(`/api/rooms/${roomId}/rate-cards`, input, rateCardVersionDto);
+  callApi(roomRoutes.addRateCard, { params: { id: roomId }, body: input });
 
 export function useCreateRateCard(roomId: number) {
   const queryClient = useQueryClient();

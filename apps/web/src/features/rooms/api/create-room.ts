@@ -1,9 +1,9 @@
 import { useMutation, useQueryClient } from "@tanstack/react-query";
-import { roomDto, type CreateRoomInput } from "@takeup/domain";
-import { api } from "../../../lib/api-client.ts";
+import { roomRoutes, type CreateRoomInput } from "@takeup/domain";
+import { callApi } from "../../../lib/api-client.ts";
 import { roomKeys } from "./room-keys.ts";
 
-export const createRoom = (input: CreateRoomInput) => api.post("/api/rooms", input, roomDto);
+export const createRoom = (input: CreateRoomInput) => callApi(roomRoutes.create, { body: input });
 
 export function useCreateRoom() {
   const queryClient = useQueryClient();

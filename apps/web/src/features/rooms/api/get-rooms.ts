@@ -1,10 +1,9 @@
 import { queryOptions, useQuery } from "@tanstack/react-query";
-import { z } from "zod";
-import { roomDto } from "@takeup/domain";
-import { api } from "../../../lib/api-client.ts";
+import { roomRoutes } from "@takeup/domain";
+import { callApi } from "../../../lib/api-client.ts";
 import { roomKeys } from "./room-keys.ts";
 
-export const getRooms = (signal?: AbortSignal) => api.get("/api/rooms", z.array(roomDto), signal);
+export const getRooms = (signal?: AbortSignal) => callApi(roomRoutes.list, { signal });
 
 export const roomsQueryOptions = () => queryOptions({ queryKey: roomKeys.list(), queryFn: ({ signal }) => getRooms(signal) });
 

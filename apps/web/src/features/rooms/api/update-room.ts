@@ -1,9 +1,9 @@
 import { useMutation, useQueryClient } from "@tanstack/react-query";
-import { roomDto, type UpdateRoomInput } from "@takeup/domain";
-import { api } from "../../../lib/api-client.ts";
+import { roomRoutes, type UpdateRoomInput } from "@takeup/domain";
+import { callApi } from "../../../lib/api-client.ts";
 import { roomKeys } from "./room-keys.ts";
 
-export const updateRoom = (id: number, input: UpdateRoomInput) => api.patch(`/api/rooms/${id}`, input, roomDto);
+export const updateRoom = (id: number, input: UpdateRoomInput) => callApi(roomRoutes.update, { params: { id }, body: input });
 
 export function useUpdateRoom(id: number) {
   const queryClient = useQueryClient();
