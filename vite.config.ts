@@ -1,7 +1,7 @@
 import { defineConfig } from "vitest/config";
 import react from "@vitejs/plugin-react";
 import tailwindcss from "@tailwindcss/vite";
-import { browserPollIntervalMs, browserWaitMs } from "./tests/support/waits";
+import { browserPollIntervalMs, browserWaitMs } from "./tests/support/waits.ts";
 
 const apiPort = Number(process.env.API_PORT ?? 3000);
 

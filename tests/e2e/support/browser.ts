@@ -2,7 +2,7 @@
 // `npm test` started (E2E_BASE_URL). A page error or console error fails the journey.
 import { chromium, type Browser, type BrowserContext, type Page } from "playwright-core";
 import { afterAll, afterEach, beforeAll, expect } from "vitest";
-import { browserWaitMs } from "../../support/waits";
+import { browserWaitMs } from "../../support/waits.ts";
 
 export const baseUrl = process.env.E2E_BASE_URL ?? "http://localhost:3100";
 const mailUrl = process.env.E2E_MAIL_URL ?? "http://127.0.0.1:2580";

@@ -1,7 +1,7 @@
 import "@testing-library/jest-dom/vitest";
 import { cleanup, configure } from "@testing-library/react";
 import { afterEach, vi } from "vitest";
-import { componentWaitMs } from "../../../../tests/support/waits";
+import { componentWaitMs } from "../../../../tests/support/waits.ts";
 
 // findBy*/waitFor give up after 1 s by default: too short on a loaded 2-core machine.
 configure({ asyncUtilTimeout: componentWaitMs });
