@@ -17,8 +17,12 @@ const smtpPort = Number(process.env.TAKEUP_TEST_SMTP_PORT ?? 2525);
 const mailHttpPort = Number(process.env.TAKEUP_TEST_MAIL_HTTP_PORT ?? 2580);
 const appUrl = `http://localhost:${port}`;
 
+// `--only=<project>` starts only what that project needs: domain and web need no server at all.
+const needsDatabase = !only || only === "api" || only === "e2e";
+const needsApp = !only || only === "e2e";
+
 ensureNodeModules();
-ensureDebianPackage("chromium", "chromium");
+if (needsApp) ensureDebianPackage("chromium", "chromium");
 
 const problems = [];
 const step = (name, command, args, env = {}) => {
@@ -33,30 +37,32 @@ const dataDir = mkdtempSync("/tmp/takeup-test-db-");
 let database;
 let exitCode = 1;
 try {
-  database = await startMariaDb({ dir: dataDir, port: dbPort, database: "takeup_test" });
+  if (needsDatabase) database = await startMariaDb({ dir: dataDir, port: dbPort, database: "takeup_test" });
   if (!only) {
     step("typecheck", "npm", ["run", "--silent", "typecheck"]);
     step("lint", bin("eslint"), [".", "--max-warnings=0"]);
   }
 
   // The browser journeys run against a real app on its own seeded database.
-  const e2eUrl = database.url.replace(/\/takeup_test$/, "/takeup_test_e2e");
-  database.createDatabase("takeup_test_e2e");
-  dbTask(e2eUrl, "migrate");
-  dbTask(e2eUrl, "seed");
-  buildWeb();
-  await startMailCatcher({ smtpPort, httpPort: mailHttpPort });
-  await startApi({
-    port,
-    quiet: !process.env.TAKEUP_LOG,
-    env: {
-      DATABASE_URL: e2eUrl,
-      APP_URL: appUrl,
-      AUTH_SECRET: randomBytes(32).toString("base64url"),
-      SMTP_URL: `smtp://127.0.0.1:${smtpPort}`,
-      MAIL_CATCHER_URL: `http://127.0.0.1:${mailHttpPort}`,
-    },
-  });
+  if (needsApp) {
+    const e2eUrl = database.url.replace(/\/takeup_test$/, "/takeup_test_e2e");
+    database.createDatabase("takeup_test_e2e");
+    dbTask(e2eUrl, "migrate");
+    dbTask(e2eUrl, "seed");
+    buildWeb();
+    await startMailCatcher({ smtpPort, httpPort: mailHttpPort });
+    await startApi({
+      port,
+      quiet: !process.env.TAKEUP_LOG,
+      env: {
+        DATABASE_URL: e2eUrl,
+        APP_URL: appUrl,
+        AUTH_SECRET: randomBytes(32).toString("base64url"),
+        SMTP_URL: `smtp://127.0.0.1:${smtpPort}`,
+        MAIL_CATCHER_URL: `http://127.0.0.1:${mailHttpPort}`,
+      },
+    });
+  }
 
   mkdirSync(`${root}/.tmp`, { recursive: true });
   const results = `${root}/.tmp/vitest-results.json`;
@@ -66,7 +72,7 @@ try {
     bin("vitest"),
     ["run", "--reporter=default", "--reporter=json", `--outputFile.json=${results}`, ...(only ? ["--project", only] : []), ...fileFilters],
     {
-      TEST_DATABASE_URL: database.url,
+      ...(database ? { TEST_DATABASE_URL: database.url } : {}),
       E2E_BASE_URL: appUrl,
       E2E_MAIL_URL: `http://127.0.0.1:${mailHttpPort}`,
     },

@@ -1,8 +1,8 @@
 // A private MariaDB instance on loopback, from Debian's package, with its data under the repo.
 import { spawn, spawnSync } from "node:child_process";
-import { existsSync, mkdirSync, readFileSync, writeFileSync, openSync } from "node:fs";
+import { copyFileSync, existsSync, mkdirSync, readFileSync, writeFileSync, openSync } from "node:fs";
 import { randomBytes } from "node:crypto";
-import { ensureDebianPackage, log, waitFor, which } from "./proc.mjs";
+import { ensureDebianPackage, log, root, StartupFailure, waitFor, which } from "./proc.mjs";
 
 export const appUser = "takeup";
 
@@ -86,11 +86,23 @@ export async function startMariaDb({ dir, port, database }) {
     );
     server.unref();
     startedHere = true;
-    await waitFor(`MariaDB on port ${port} (see ${dir}/error.log)`, () => {
-      if (!readPid(dir) || !existsSync(`${dir}/mysqld.sock`)) return false;
-      sql(dir, "SELECT 1;");
-      return true;
-    });
+    let exited = false;
+    server.once("exit", () => (exited = true));
+    try {
+      await waitFor(`MariaDB on port ${port} (see ${dir}/error.log)`, () => {
+        if (exited) throw new StartupFailure(`MariaDB exited during start-up on port ${port}`);
+        if (!readPid(dir) || !existsSync(`${dir}/mysqld.sock`)) return false;
+        sql(dir, "SELECT 1;");
+        return true;
+      });
+    } catch (error) {
+      // Throw-away data directories are removed afterwards: keep the server's own account of why.
+      mkdirSync(`${root}/.tmp`, { recursive: true });
+      const kept = `${root}/.tmp/mariadb-error-${port}.log`;
+      copyFileSync(`${dir}/error.log`, kept);
+      const tail = readFileSync(kept, "utf8").trim().split("\n").slice(-15).join("\n");
+      throw new Error(`${error.message}; its error log is kept in ${kept}:\n${tail}`);
+    }
   }
 
   const passwordFile = `${dir}/app-password`;

@@ -1,6 +1,6 @@
 // Small process helpers for the start and test scripts (plain Node: they run before npm install).
 import { spawn, spawnSync } from "node:child_process";
-import { existsSync } from "node:fs";
+import { existsSync, statSync } from "node:fs";
 
 export const root = new URL("../..", import.meta.url).pathname.replace(/\/$/, "");
 
@@ -40,6 +40,14 @@ export function startChild(name, command, args, options = {}) {
     });
   prefix(child.stdout, process.stdout);
   prefix(child.stderr, process.stderr);
+  // The last lines, kept even when quiet, so a child that dies during start-up can say why.
+  child.lastLines = [];
+  for (const stream of [child.stdout, child.stderr]) {
+    stream.on("data", (chunk) => {
+      child.lastLines.push(...chunk.toString().split("\n").filter(Boolean));
+      child.lastLines.splice(0, Math.max(0, child.lastLines.length - 40));
+    });
+  }
   children.add(child);
   child.on("exit", () => children.delete(child));
   return child;
@@ -58,12 +66,16 @@ export async function stopChildren() {
   await Promise.all(waits);
 }
 
+/** Thrown by a waitFor() check when waiting longer cannot help (the process died). */
+export class StartupFailure extends Error {}
+
 export async function waitFor(what, check, timeoutMs = 30000) {
   const started = Date.now();
   for (;;) {
     try {
       if (await check()) return;
-    } catch {
+    } catch (error) {
+      if (error instanceof StartupFailure) throw error;
       // not up yet
     }
     if (Date.now() - started > timeoutMs) throw new Error(`Timed out waiting for ${what}`);
@@ -100,7 +112,7 @@ export function ensureDebianPackage(command, pkg) {
 /** Runs `npm ci` when node_modules is missing or older than the lockfile. */
 export function ensureNodeModules() {
   const marker = `${root}/node_modules/.package-lock.json`;
-  if (existsSync(marker)) return;
-  log("installing npm dependencies (npm ci) …");
+  if (existsSync(marker) && statSync(marker).mtimeMs >= statSync(`${root}/package-lock.json`).mtimeMs) return;
+  log(existsSync(marker) ? "package-lock.json changed: reinstalling npm dependencies (npm ci) …" : "installing npm dependencies (npm ci) …");
   run("npm", ["ci", "--no-audit", "--no-fund"]);
 }

@@ -1,7 +1,7 @@
 // Brings up the pieces both `npm start` and `npm test` need: database, schema, fakes, API.
 import { existsSync, mkdirSync, readFileSync, writeFileSync } from "node:fs";
 import { randomBytes } from "node:crypto";
-import { httpOk, log, root, run, startChild, waitFor } from "./proc.mjs";
+import { httpOk, log, root, run, startChild, StartupFailure, waitFor } from "./proc.mjs";
 import { startMariaDb } from "./mariadb.mjs";
 
 export const tsx = `${root}/node_modules/.bin/tsx`;
@@ -48,7 +48,7 @@ export async function startApi({ port, env, quiet = false, watch = false }) {
   let exited = false;
   child.once("exit", () => (exited = true));
   await waitFor("the API", () => {
-    if (exited) throw new Error("the API exited during start-up");
+    if (exited) throw new StartupFailure(`the API exited during start-up; its last lines:\n${child.lastLines.join("\n")}`);
     return httpOk(`http://127.0.0.1:${port}/api/health`);
   }, 60000);
   return child;
