@@ -147,6 +147,8 @@ export const payRateDto = z.object({
   code: z.string(),
   hourlyRateCents: z.number(),
   effectiveFrom: z.string(),
+  /** A locked pay period was computed with this rate: it can no longer be corrected. */
+  usedByLockedPeriod: z.boolean(),
 });
 export type PayRateDto = z.infer<typeof payRateDto>;
 export const createPayRateInput = z.strictObject({
@@ -156,6 +158,13 @@ export const createPayRateInput = z.strictObject({
   effectiveFrom: localDate,
 });
 export type CreatePayRateInput = z.infer<typeof createPayRateInput>;
+/** Replaces a mistaken amount or date (not the person or code), with the reason kept in the audit log. */
+export const correctPayRateInput = z.strictObject({
+  hourlyRateCents: createPayRateInput.shape.hourlyRateCents.optional(),
+  effectiveFrom: localDate.optional(),
+  reason: z.string().trim().min(3, "Say why the rate is corrected").max(500, "Use at most 500 characters"),
+});
+export type CorrectPayRateInput = z.infer<typeof correctPayRateInput>;
 
 export const payrollSettingsDto = z.object({
   timeZone: z.string(),
