@@ -86,6 +86,8 @@ export const timeEntryEdits = mysqlTable(
     decidedByUserId: varchar("decided_by_user_id", { length: 36 }).references(() => user.id),
     decidedAt: utc("decided_at"),
     decisionNote: varchar("decision_note", { length: 500 }),
+    /** The entry an approval wrote: the corrected one, or the one it added. */
+    resultEntryId: refId("result_entry_id").references(() => timeEntries.id),
     /** An owner approved a change to their own time (no other owner to ask); shown to the bookkeeper. */
     selfApproved: boolean("self_approved").notNull().default(false),
     createdAt: createdAt(),
