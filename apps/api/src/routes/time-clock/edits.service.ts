@@ -1,7 +1,7 @@
 import { and, count, desc, eq, gt, isNull, lt, ne, or } from "drizzle-orm";
 import { alias } from "drizzle-orm/mysql-core";
 import { bookingEngineers, staffProfiles, timeEntries, timeEntryBreaks, timeEntryEdits, user, type Db, type ProposedEntry, type Tx } from "@takeup/db";
-import type { ApprovalRule, ProposeEditInput, Role, StaffRole, TimeEntryEditDto } from "@takeup/domain";
+import { timeDateProblem, type ApprovalRule, type ProposeEditInput, type Role, type StaffRole, type TimeEntryEditDto } from "@takeup/domain";
 import { conflict, HttpError, notFound } from "../../lib/http-error.ts";
 import { writeAudit } from "../../lib/audit.ts";
 import type { Actor } from "../../lib/actor.ts";
@@ -13,6 +13,8 @@ const problem = (field: string, message: string) => new HttpError(400, "invalid_
 function checkShape(p: ProposedEntry) {
   const start = new Date(p.startedAt);
   const end = new Date(p.endedAt);
+  const outside = [timeDateProblem("startedAt", start), timeDateProblem("endedAt", end)].filter((x) => x !== null);
+  if (outside.length > 0) throw new HttpError(400, "invalid_input", outside[0]!.message, outside);
   if (end <= start) throw problem("endedAt", "The end must be after the start");
   if (end.getTime() - start.getTime() > 24 * 3_600_000) throw problem("endedAt", "An entry lasts at most 24 hours; split longer work into two entries");
   for (const [i, b] of p.breaks.entries()) {
