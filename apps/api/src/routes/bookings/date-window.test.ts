@@ -62,10 +62,12 @@ describe("dates in a sane window", () => {
 
   it("lets an engineer start a session only near its booked time, then wrap it", async () => {
     const later = await manager.post("/api/bookings").send(booking({ startsAt: at(10, 2, "10:00"), endsAt: at(10, 2, "13:00"), status: "confirmed" }));
+    expect(later.body.allowedActions).not.toContain("start");
     const early = await priya.post(`/api/bookings/${later.body.id}/start`);
     expect(early.status).toBe(409);
     expect(early.body.error).toMatchObject({ code: "not_session_time", message: expect.stringContaining("60 minutes before its booked start") });
     const now = await sessionAround(-30, "confirmed", 11);
+    expect((await priya.get(`/api/bookings/${now}`)).body.allowedActions).toContain("start");
     expect((await priya.post(`/api/bookings/${now}/start`)).body.status).toBe("in_session");
     expect((await priya.post(`/api/bookings/${now}/wrap`)).body.status).toBe("wrapped");
   });
