@@ -48,3 +48,4 @@ export { rateCardFromVersion, type RateCardVersionFields } from "./pricing/from-
 export * from "./payroll/settings-catalogue.ts";
 export * from "./contracts/time.ts";
 export { addDays as addCalendarDays, workdayOf, workdayStart, workweekContaining, type Workweek } from "./payroll/studio-calendar.ts";
+export * from "./shared/date-window.ts";

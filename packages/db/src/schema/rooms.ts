@@ -1,3 +1,4 @@
+import { sql } from "drizzle-orm";
 import { boolean, index, int, json, mysqlEnum, mysqlTable, text, unique, varchar } from "drizzle-orm/mysql-core";
 import { createdAt, id, refId, updatedAt, utc } from "./columns.ts";
 import { user } from "./auth.ts";
@@ -70,10 +71,13 @@ export const engineerRates = mysqlTable(
     staffUserId: varchar("staff_user_id", { length: 36 }).references(() => user.id),
     hourlyRateCents: int("hourly_rate_cents").notNull(),
     effectiveFrom: utc("effective_from").notNull(),
+    /** The staff id, or "" for a grade's rate: a unique key treats NULLs as distinct, so it keys on this
+     *  (MariaDB refuses NOT NULL on a generated column; coalesce never yields NULL). */
+    staffKey: varchar("staff_key", { length: 36 }).generatedAlwaysAs(sql`coalesce(\`staff_user_id\`, '')`, { mode: "stored" }),
     createdByUserId: varchar("created_by_user_id", { length: 36 }).references(() => user.id),
     createdAt: createdAt(),
   },
-  (t) => [index("engineer_rates_grade_effective").on(t.grade, t.effectiveFrom)],
+  (t) => [index("engineer_rates_grade_effective").on(t.grade, t.effectiveFrom), unique("engineer_rates_grade_staff_from").on(t.grade, t.staffKey, t.effectiveFrom)],
 );
 
 export type Room = typeof rooms.$inferSelect;

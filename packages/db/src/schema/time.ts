@@ -1,4 +1,4 @@
-import { char, index, int, json, mysqlEnum, mysqlTable, unique, varchar } from "drizzle-orm/mysql-core";
+import { boolean, char, index, int, json, mysqlEnum, mysqlTable, unique, varchar } from "drizzle-orm/mysql-core";
 import { createdAt, id, refId, updatedAt, utc } from "./columns.ts";
 import { user } from "./auth.ts";
 import { bookings } from "./bookings.ts";
@@ -20,7 +20,8 @@ export const payRates = mysqlTable(
     createdByUserId: varchar("created_by_user_id", { length: 36 }).references(() => user.id),
     createdAt: createdAt(),
   },
-  (t) => [index("pay_rates_staff_code").on(t.staffUserId, t.code, t.effectiveFrom)],
+  // One rate per person, code and date: two would leave the rules engine no way to choose (422 on every period).
+  (t) => [unique("pay_rates_staff_code_from").on(t.staffUserId, t.code, t.effectiveFrom)],
 );
 
 /** Time worked: a clocked or manual span, against a booked session or as shop time. */
@@ -67,22 +68,28 @@ export type ProposedEntry = {
   bookingId: number | null;
 };
 
-/** A correction (or a missing entry) an engineer proposes; a manager approves or rejects it. */
+/** A correction (or a missing entry) to a person's time; someone other than that person approves or rejects it (decision 011). */
 export const timeEntryEdits = mysqlTable(
   "time_entry_edits",
   {
     id: id(),
     /** Null when the proposal adds a manual entry. */
     timeEntryId: refId("time_entry_id").references(() => timeEntries.id),
+    /** Whose time it is (the entry's person), not who proposed the change. */
     staffUserId: varchar("staff_user_id", { length: 36 })
       .notNull()
       .references(() => user.id),
+    proposedByUserId: varchar("proposed_by_user_id", { length: 36 }).references(() => user.id),
     proposed: json("proposed").$type<ProposedEntry>().notNull(),
     reason: varchar("reason", { length: 500 }).notNull(),
     status: mysqlEnum("status", editStatuses).notNull().default("pending"),
     decidedByUserId: varchar("decided_by_user_id", { length: 36 }).references(() => user.id),
     decidedAt: utc("decided_at"),
     decisionNote: varchar("decision_note", { length: 500 }),
+    /** The entry an approval wrote: the corrected one, or the one it added. */
+    resultEntryId: refId("result_entry_id").references(() => timeEntries.id),
+    /** An owner approved a change to their own time (no other owner to ask); shown to the bookkeeper. */
+    selfApproved: boolean("self_approved").notNull().default(false),
     createdAt: createdAt(),
   },
   (t) => [index("time_entry_edits_status").on(t.status), index("time_entry_edits_staff").on(t.staffUserId)],

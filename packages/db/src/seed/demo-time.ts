@@ -75,6 +75,7 @@ export async function seedTime(tx: Tx, now = new Date()) {
   await tx.insert(timeEntryEdits).values({
     timeEntryId: samLateEntry,
     staffUserId: id("Sam Reyes"),
+    proposedByUserId: id("Sam Reyes"),
     proposed: { startedAt: at(-4, "10:00").toISOString(), endedAt: at(-4, "18:00").toISOString(), breaks: [{ startedAt: at(-4, "14:00").toISOString(), endedAt: at(-4, "14:30").toISOString() }], bookingId: null },
     reason: "Forgot to clock out when I left at 18:00",
   });

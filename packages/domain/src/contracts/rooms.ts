@@ -119,6 +119,13 @@ export const createEngineerRateInput = z.strictObject({
   effectiveFrom: z.iso.datetime({ offset: true, message: "Use an ISO date and time" }).optional(),
 });
 export type CreateEngineerRateInput = z.infer<typeof createEngineerRateInput>;
+/** Replaces a mistaken amount or start; bookings already quoted keep their quotes. */
+export const correctEngineerRateInput = z.strictObject({
+  hourlyRateCents: cents("The rate").optional(),
+  effectiveFrom: z.iso.datetime({ offset: true, message: "Use an ISO date and time" }).optional(),
+  reason: z.string().trim().min(3, "Say why the rate is corrected").max(500, "Use at most 500 characters"),
+});
+export type CorrectEngineerRateInput = z.infer<typeof correctEngineerRateInput>;
 
 export const engineerDto = z.object({
   userId: z.string(),

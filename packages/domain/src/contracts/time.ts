@@ -15,7 +15,7 @@ const localDate = z.iso.date("Use a date as YYYY-MM-DD");
 
 export const timeBreakDto = z.object({ id: z.number(), startedAt: z.string(), endedAt: z.string().nullable() });
 
-export const timeEntryFlags = ["open_too_long", "missing_break", "pending_edit", "no_pay_rate"] as const;
+export const timeEntryFlags = ["open_too_long", "missing_break", "pending_edit", "no_pay_rate", "self_approved"] as const;
 
 export const timeEntryDto = z.object({
   id: z.number(),
@@ -72,6 +72,15 @@ export const proposeEditInput = z.strictObject({
 });
 export type ProposeEditInput = z.infer<typeof proposeEditInput>;
 
+/**
+ * For the viewer: `may_approve`; `self_approval` (the sole owner's own time: approving records it as
+ * self-approved, shown to the bookkeeper); `another_owner` (an owner's own time when there is another
+ * owner); `own_time` (a manager's own time: an owner or another manager decides); `owners_only`
+ * (an owner's time, seen by a manager); `cannot_decide` (engineers and the bookkeeper).
+ */
+export const approvalRules = ["may_approve", "self_approval", "another_owner", "own_time", "owners_only", "cannot_decide"] as const;
+export type ApprovalRule = (typeof approvalRules)[number];
+
 export const timeEntryEditDto = z.object({
   id: z.number(),
   timeEntryId: z.number().nullable(),
@@ -86,6 +95,12 @@ export const timeEntryEditDto = z.object({
   current: z.object({ startedAt: z.string(), endedAt: z.string().nullable(), breaks: z.array(z.object({ startedAt: z.string(), endedAt: z.string().nullable() })) }).nullable(),
   reason: z.string(),
   status: z.enum(editStatuses),
+  /** Who proposed it; `staffName` is whose time it is. */
+  proposedByName: z.string().nullable(),
+  /** What approving it would mean for the person viewing the list (decision 011). */
+  approvalRule: z.enum(approvalRules),
+  /** The sole owner approved a change to their own time. */
+  selfApproved: z.boolean(),
   decidedByName: z.string().nullable(),
   decidedAt: z.string().nullable(),
   decisionNote: z.string().nullable(),
@@ -147,6 +162,8 @@ export const payRateDto = z.object({
   code: z.string(),
   hourlyRateCents: z.number(),
   effectiveFrom: z.string(),
+  /** A locked pay period was computed with this rate: it can no longer be corrected. */
+  usedByLockedPeriod: z.boolean(),
 });
 export type PayRateDto = z.infer<typeof payRateDto>;
 export const createPayRateInput = z.strictObject({
@@ -156,6 +173,13 @@ export const createPayRateInput = z.strictObject({
   effectiveFrom: localDate,
 });
 export type CreatePayRateInput = z.infer<typeof createPayRateInput>;
+/** Replaces a mistaken amount or date (not the person or code), with the reason kept in the audit log. */
+export const correctPayRateInput = z.strictObject({
+  hourlyRateCents: createPayRateInput.shape.hourlyRateCents.optional(),
+  effectiveFrom: localDate.optional(),
+  reason: z.string().trim().min(3, "Say why the rate is corrected").max(500, "Use at most 500 characters"),
+});
+export type CorrectPayRateInput = z.infer<typeof correctPayRateInput>;
 
 export const payrollSettingsDto = z.object({
   timeZone: z.string(),

@@ -1,11 +1,12 @@
 import { asc, eq, inArray, type SQL } from "drizzle-orm";
 import { bookingEngineers, bookingEquipment, bookings, clientAccounts, equipment, projects, rooms, staffProfiles, type DbOrTx } from "@takeup/db";
-import { allowedActions, type BookingDto } from "@takeup/domain";
+import { allowedActions, nearBookedTime, type BookingDto } from "@takeup/domain";
 
 const iso = (d: Date | null) => (d ? d.toISOString() : null);
 
 /** Loads bookings matching `where` as DTOs: one query for the rows, one each for engineers and kit. */
 export async function loadBookingDtos(db: DbOrTx, where: SQL | undefined, limit = 2000): Promise<BookingDto[]> {
+  const now = new Date();
   const rows = await db
     .select({ booking: bookings, room: rooms, clientName: clientAccounts.name, projectName: projects.name })
     .from(bookings)
@@ -52,7 +53,8 @@ export async function loadBookingDtos(db: DbOrTx, where: SQL | undefined, limit 
     cancelledAt: iso(b.cancelledAt),
     cancellationReason: b.cancellationReason,
     cancellationFeeCents: b.cancellationFeeCents,
-    allowedActions: b.queuedBehindId ? allowedActions(b.status).filter((a) => a !== "confirm") : allowedActions(b.status),
+    // No Start button for a session that is not near its booked time (docs/date-window.md).
+    allowedActions: allowedActions(b.status).filter((a) => !(a === "confirm" && b.queuedBehindId) && !(a === "start" && !nearBookedTime(b.startsAt, b.endsAt, now))),
     createdAt: b.createdAt.toISOString(),
   }));
 }

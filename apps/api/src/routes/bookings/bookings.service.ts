@@ -1,6 +1,7 @@
 import { and, eq, gt, gte, inArray, lt, type SQL } from "drizzle-orm";
 import { bookingEngineers, bookings, clientAccounts, projects, rateCardVersions, type Db, type Tx } from "@takeup/db";
 import {
+  bookingDateProblem,
   maxBookingMinutes,
   type BookingDto,
   type BookingsQuery,
@@ -28,8 +29,16 @@ const isStaff = (actor: Actor) => actor.role !== "client";
 /** Booking writes run READ COMMITTED: after the resource locks, every read sees the latest commits. */
 export const bookingTx = <T>(db: Db, work: (tx: Tx) => Promise<T>) => db.transaction(work, { isolationLevel: "read committed" });
 
-function window(startsAt: string, endsAt: string) {
+/** Refuses (400) a booking instant outside the date window (docs/date-window.md), naming the field. */
+function inDateWindow(instants: { field: "startsAt" | "endsAt"; at: Date }[]) {
+  const problems = instants.flatMap(({ field, at }) => bookingDateProblem(field, at) ?? []);
+  if (problems.length > 0) throw new HttpError(400, "invalid_input", problems[0]!.message, problems);
+}
+
+/** The booking's times, checked for order and length; `changed` names the ones to hold to the date window. */
+function window(startsAt: string, endsAt: string, changed: ("startsAt" | "endsAt")[] = ["startsAt", "endsAt"]) {
   const w = { startsAt: new Date(startsAt), endsAt: new Date(endsAt) };
+  inDateWindow(changed.map((field) => ({ field, at: w[field] })));
   if (w.endsAt <= w.startsAt) {
     throw new HttpError(400, "invalid_input", "The end must be after the start", [{ field: "endsAt", rule: "after_start", message: "End after the start" }]);
   }
@@ -139,7 +148,9 @@ export async function updateBooking(db: Db, actor: Actor, id: number, input: Upd
       throw new HttpError(409, "booking_closed", `A ${existing.status} booking cannot be changed`);
     }
     const links = await currentLinks(tx, id);
-    const w = window(input.startsAt ?? existing.startsAt.toISOString(), input.endsAt ?? existing.endsAt.toISOString());
+    // Only moved times must fit the window: editing the notes of an old booking stays possible.
+    const moved = (["startsAt", "endsAt"] as const).filter((field) => input[field] !== undefined);
+    const w = window(input.startsAt ?? existing.startsAt.toISOString(), input.endsAt ?? existing.endsAt.toISOString(), moved);
     const resources = { roomId: existing.roomId, engineerIds: input.engineerIds ? unique(input.engineerIds) : links.engineerIds, equipmentIds: input.equipmentIds ? unique(input.equipmentIds) : links.equipmentIds };
     const room = await requireRoom(tx, resources);
     const before = await loadBookingDto(tx, id);

@@ -91,6 +91,10 @@ describe("session states and cancellation", () => {
   it("starts and wraps a confirmed session, and refuses to skip a step", async () => {
     const booked = await hold("Blue Hour Records", slot(7, 1, "10:00", "14:00"), { status: "confirmed", engineerIds: [ids.person("Priya Oduya")] });
     expect((await manager.post(`/api/bookings/${booked.body.id}/wrap`)).status).toBe(409);
+    // A session starts only near its booked time (date-window.test.ts): the day has come.
+    const startsAt = new Date(Date.now() - 10 * 60_000);
+    const endsAt = new Date(startsAt.getTime() + 4 * 3600_000);
+    await t.db.update(bookings).set({ startsAt, endsAt }).where(eq(bookings.id, booked.body.id));
     const engineer = await t.signIn(demo.engineer);
     expect((await engineer.post(`/api/bookings/${booked.body.id}/start`)).body.status).toBe("in_session");
     expect((await engineer.post(`/api/bookings/${booked.body.id}/wrap`)).body.status).toBe("wrapped");

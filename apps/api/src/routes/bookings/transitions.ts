@@ -1,6 +1,6 @@
 import { eq } from "drizzle-orm";
 import { bookings } from "@takeup/db";
-import { cancellationFee, nextStatus, type BookingAction, type BookingDto, type CancellationPreviewDto } from "@takeup/domain";
+import { cancellationFee, dateWindow, nearBookedTime, nextStatus, type BookingAction, type BookingDto, type CancellationPreviewDto } from "@takeup/domain";
 import { HttpError, notFound } from "../../lib/http-error.ts";
 import { writeAudit } from "../../lib/audit.ts";
 import type { Actor } from "../../lib/actor.ts";
@@ -45,6 +45,13 @@ export async function transitionBooking(
     }
     const to = nextStatus(booking.status, action);
     if (!to) throw new HttpError(409, "invalid_transition", `A booking that is ${booking.status.replace("_", " ")} cannot be ${labels[action]}`);
+    if (action === "start" && !nearBookedTime(booking.startsAt, booking.endsAt, now)) {
+      throw new HttpError(
+        409,
+        "not_session_time",
+        `A session can be started from ${dateWindow.startEarlyMinutes} minutes before its booked start until ${dateWindow.startLateMinutes / 60} hours after its booked end; this one is booked for ${booking.startsAt.toISOString()}`,
+      );
+    }
     if (action === "confirm" && booking.queuedBehindId) {
       throw new HttpError(409, "second_hold", `This is a second hold behind booking #${booking.queuedBehindId}; it can be confirmed once it moves up`);
     }

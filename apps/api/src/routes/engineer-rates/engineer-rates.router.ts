@@ -1,11 +1,26 @@
 import { and, asc, desc, eq } from "drizzle-orm";
 import { z } from "zod";
-import { engineerRates, staffProfiles } from "@takeup/db";
-import { createEngineerRateInput, engineerDto, engineerRateDto } from "@takeup/domain";
+import { engineerRates, isDuplicateKeyError, staffProfiles } from "@takeup/db";
+import { correctEngineerRateInput, createEngineerRateInput, engineerDto, engineerRateDto, idParams } from "@takeup/domain";
 import { ApiRouter } from "../../lib/api-router.ts";
-import { HttpError } from "../../lib/http-error.ts";
+import { HttpError, notFound } from "../../lib/http-error.ts";
 import { writeAudit } from "../../lib/audit.ts";
 import type { Deps } from "../../deps.ts";
+
+const duplicate = (effectiveFrom: Date) =>
+  new HttpError(409, "duplicate_engineer_rate", `There is already a rate for this grade or engineer from ${effectiveFrom.toISOString()}; correct that rate instead of adding another`, [
+    { field: "effectiveFrom", rule: "unique", message: "One rate per grade (or engineer) and start" },
+  ]);
+
+/** Runs an insert or update, answering 409 when the unique (grade, engineer, start) key refuses it. */
+async function uniqueRate<T>(effectiveFrom: Date, write: () => Promise<T>): Promise<T> {
+  try {
+    return await write();
+  } catch (error) {
+    if (isDuplicateKeyError(error)) throw duplicate(effectiveFrom);
+    throw error;
+  }
+}
 
 export function engineerRatesRouter({ db }: Deps) {
   const list = async () => {
@@ -53,11 +68,33 @@ export function engineerRatesRouter({ db }: Deps) {
             effectiveFrom: body.effectiveFrom ? new Date(body.effectiveFrom) : new Date(),
             createdByUserId: actor.userId,
           };
-          const [created] = await tx.insert(engineerRates).values(values).$returningId();
+          const [created] = await uniqueRate(values.effectiveFrom, () => tx.insert(engineerRates).values(values).$returningId());
           await writeAudit(tx, actor, "engineer_rate.added", { type: "engineer_rate", id: created!.id }, { after: values });
           return created!.id;
         });
         return (await list()).find((r) => r.id === id)!;
+      },
+    })
+    .route({
+      method: "patch",
+      path: "/:id",
+      summary: "Correct an engineer rate's amount or start, with a reason (audited); bookings already quoted keep their quotes",
+      access: ["owner"],
+      params: idParams,
+      body: correctEngineerRateInput,
+      response: engineerRateDto,
+      handler: async ({ actor, params, body }) => {
+        await db.transaction(async (tx) => {
+          const [rate] = await tx.select().from(engineerRates).where(eq(engineerRates.id, params.id)).for("update");
+          if (!rate) throw notFound("That engineer rate");
+          const changes = { hourlyRateCents: body.hourlyRateCents ?? rate.hourlyRateCents, effectiveFrom: body.effectiveFrom ? new Date(body.effectiveFrom) : rate.effectiveFrom };
+          await uniqueRate(changes.effectiveFrom, () => tx.update(engineerRates).set(changes).where(eq(engineerRates.id, params.id)));
+          await writeAudit(tx, actor, "engineer_rate.corrected", { type: "engineer_rate", id: params.id }, {
+            before: { hourlyRateCents: rate.hourlyRateCents, effectiveFrom: rate.effectiveFrom },
+            after: { ...changes, reason: body.reason },
+          });
+        });
+        return (await list()).find((r) => r.id === params.id)!;
       },
     });
 }

@@ -69,6 +69,7 @@ export async function reviewPayPeriod(db: Db, id: number): Promise<PayPeriodRevi
   for (const e of inPeriod) {
     if (e.flags.includes("open_too_long")) flags.push({ kind: "open_too_long", staffName: e.staffName, entryId: e.id, message: `${e.staffName} has been clocked in since ${e.startedAt} and has not clocked out` });
     else if (e.endedAt === null) flags.push({ kind: "open_too_long", staffName: e.staffName, entryId: e.id, message: `${e.staffName} is still clocked in; the entry is not paid until it is closed` });
+    if (e.flags.includes("self_approved")) flags.push({ kind: "self_approved", staffName: e.staffName, entryId: e.id, message: `${e.staffName} approved a correction to their own time (no other owner to ask); check it before approving the period` });
     if (e.flags.includes("missing_break")) flags.push({ kind: "missing_break", staffName: e.staffName, entryId: e.id, message: `${e.staffName} worked ${Math.floor((e.workedMinutes ?? 0) / 60)} h without a recorded break` });
   }
   for (const edit of pending) {

@@ -148,6 +148,7 @@ export async function writeWorkbook(c: ComputedPeriod, res: Response, timeZone: 
     { header: "Worked hours", key: "worked", width: 13, style: { numFmt: "0.00" } },
     { header: "Pay rate code", key: "rate", width: 13 },
     { header: "Note", key: "note", width: 40 },
+    { header: "Self-approved", key: "selfApproved", width: 13 },
   ];
   raw.getRow(1).font = { bold: true };
   const rawStyled = sharedStyles(raw);
@@ -170,6 +171,8 @@ export async function writeWorkbook(c: ComputedPeriod, res: Response, timeZone: 
       rate: e.payRateCode,
       // The reason it is not paid comes first; the entry's own note follows.
       note: [whyUnpaid(e, trace), e.note].filter(Boolean).join(" — "),
+      // An owner approved a correction to their own time (decision 011): the bookkeeper checks it.
+      selfApproved: e.flags.includes("self_approved") ? "yes" : "",
     })).commit();
   }
   raw.commit();

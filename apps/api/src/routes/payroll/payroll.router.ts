@@ -1,7 +1,6 @@
-import { asc, eq } from "drizzle-orm";
 import { z } from "zod";
-import { payRates, staffProfiles } from "@takeup/db";
 import {
+  correctPayRateInput,
   createPayRateInput,
   exportQuery,
   idParams,
@@ -13,10 +12,9 @@ import {
   updatePayrollSettingsInput,
 } from "@takeup/domain";
 import { ApiRouter } from "../../lib/api-router.ts";
-import { notFound } from "../../lib/http-error.ts";
-import { writeAudit } from "../../lib/audit.ts";
 import type { Deps } from "../../deps.ts";
 import { computePeriod } from "./compute-period.ts";
+import { correctPayRate, createPayRate, listPayRates } from "./pay-rates.service.ts";
 import { summaryCsv, writeWorkbook } from "./payroll-export.ts";
 import { loadPayroll, updatePayrollSettings } from "./payroll-settings.ts";
 import { getPeriodRow, listPayPeriods, movePayPeriod, periodFileName, reviewPayPeriod } from "./pay-periods.service.ts";
@@ -61,29 +59,26 @@ export function payrollSettingsRouter({ db }: Deps) {
 }
 
 export function payRatesRouter({ db }: Deps) {
-  const list = async () => {
-    const rows = await db.select({ rate: payRates, staffName: staffProfiles.displayName }).from(payRates).innerJoin(staffProfiles, eq(staffProfiles.userId, payRates.staffUserId)).orderBy(asc(staffProfiles.displayName), asc(payRates.code), asc(payRates.effectiveFrom));
-    return rows.map(({ rate, staffName }) => ({ id: rate.id, staffUserId: rate.staffUserId, staffName, code: rate.code, hourlyRateCents: rate.hourlyRateCents, effectiveFrom: rate.effectiveFrom }));
-  };
   return new ApiRouter("/api/pay-rates", "Payroll")
-    .route({ method: "get", path: "/", summary: "What each member of staff is paid per hour, by kind of work and date", access: ["owner", "bookkeeper"], response: z.array(payRateDto), handler: list })
+    .route({ method: "get", path: "/", summary: "What each member of staff is paid per hour, by kind of work and date", access: ["owner", "bookkeeper"], response: z.array(payRateDto), handler: () => listPayRates(db) })
     .route({
       method: "post",
       path: "/",
-      summary: "Set a pay rate from a date",
+      summary: "Set a pay rate from a date (409 when the person already has one for that code and date)",
       access: ["owner"],
       body: createPayRateInput,
       status: 201,
       response: payRateDto,
-      handler: async ({ actor, body }) => {
-        const id = await db.transaction(async (tx) => {
-          const [staff] = await tx.select().from(staffProfiles).where(eq(staffProfiles.userId, body.staffUserId));
-          if (!staff) throw notFound("That member of staff");
-          const [created] = await tx.insert(payRates).values({ ...body, createdByUserId: actor.userId }).$returningId();
-          await writeAudit(tx, actor, "pay_rate.added", { type: "pay_rate", id: created!.id }, { after: body });
-          return created!.id;
-        });
-        return (await list()).find((r) => r.id === id)!;
-      },
+      handler: ({ actor, body }) => createPayRate(db, actor, body),
+    })
+    .route({
+      method: "patch",
+      path: "/:id",
+      summary: "Correct a rate's amount or date, with a reason (audited); 423 once a locked period was computed with it",
+      access: ["owner"],
+      params: idParams,
+      body: correctPayRateInput,
+      response: payRateDto,
+      handler: ({ actor, params, body }) => correctPayRate(db, actor, params.id, body),
     });
 }

@@ -99,7 +99,8 @@ describe("locking and exports", () => {
     const before = (await books.get(`/api/pay-periods/${periodId}`)).body;
     expect(before.period.status).toBe("locked");
     await owner.patch("/api/payroll-settings").send({ overtimeRules: "daily_weekly_seventh_day", punchRounding: "5" });
-    await owner.post("/api/pay-rates").send({ staffUserId: joId, code: "assistant", hourlyRateCents: 9900, effectiveFrom: monday.toISODate() });
+    const raise = await owner.post("/api/pay-rates").send({ staffUserId: joId, code: "assistant", hourlyRateCents: 9900, effectiveFrom: monday.plus({ days: 1 }).toISODate() });
+    expect(raise.status).toBe(201);
     const after = (await books.get(`/api/pay-periods/${periodId}`)).body;
     expect(after.staff).toEqual(before.staff);
     await owner.patch("/api/payroll-settings").send({ overtimeRules: "federal_weekly", punchRounding: "15" });

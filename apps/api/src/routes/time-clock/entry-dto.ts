@@ -33,6 +33,7 @@ export async function loadEntryDtos(db: DbOrTx, where: SQL | undefined, openLimi
   if (rows.length === 0) return [];
   const breaksByEntry = new Map<number, (typeof timeEntryBreaks.$inferSelect)[]>();
   const pendingIds = new Set<number | null>();
+  const selfApprovedIds = new Set<number | null>();
   for (const ids of batches(rows.map((r) => r.entry.id), idBatch)) {
     const breaks = await db.select().from(timeEntryBreaks).where(inArray(timeEntryBreaks.timeEntryId, ids)).orderBy(asc(timeEntryBreaks.startedAt));
     for (const b of breaks) {
@@ -45,6 +46,11 @@ export async function loadEntryDtos(db: DbOrTx, where: SQL | undefined, openLimi
       .from(timeEntryEdits)
       .where(and(inArray(timeEntryEdits.timeEntryId, ids), eq(timeEntryEdits.status, "pending")));
     for (const p of pending) pendingIds.add(p.timeEntryId);
+    const selfApproved = await db
+      .select({ entryId: timeEntryEdits.resultEntryId })
+      .from(timeEntryEdits)
+      .where(and(inArray(timeEntryEdits.resultEntryId, ids), eq(timeEntryEdits.selfApproved, true)));
+    for (const p of selfApproved) selfApprovedIds.add(p.entryId);
   }
   return rows.map(({ entry, staffName, roomName, clientName }) => {
     const own = breaksByEntry.get(entry.id) ?? [];
@@ -54,6 +60,7 @@ export async function loadEntryDtos(db: DbOrTx, where: SQL | undefined, openLimi
     if (!entry.endedAt && now.getTime() - entry.startedAt.getTime() > openLimitHours * 3600_000) flags.push("open_too_long");
     if (workedMinutes !== null && workedMinutes > breakExpectedAfterMinutes && own.length === 0) flags.push("missing_break");
     if (pendingIds.has(entry.id)) flags.push("pending_edit");
+    if (selfApprovedIds.has(entry.id)) flags.push("self_approved");
     return {
       id: entry.id,
       staffUserId: entry.staffUserId,

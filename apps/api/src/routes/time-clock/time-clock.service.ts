@@ -1,6 +1,6 @@
 import { and, asc, desc, eq, gt, gte, inArray, isNull, lt, lte, or } from "drizzle-orm";
 import { bookingEngineers, bookings, clientAccounts, rooms, staffProfiles, timeEntries, timeEntryBreaks, type Db, type Tx } from "@takeup/db";
-import { clockedMinutesByWorkday, workdayStart, workweekContaining, addCalendarDays, type TimeClockDto, type TimeEntryDto } from "@takeup/domain";
+import { clockedMinutesByWorkday, dateWindow, nearBookedTime, workdayStart, workweekContaining, addCalendarDays, type TimeClockDto, type TimeEntryDto } from "@takeup/domain";
 import { conflict, HttpError, notFound } from "../../lib/http-error.ts";
 import { writeAudit } from "../../lib/audit.ts";
 import type { Actor } from "../../lib/actor.ts";
@@ -95,6 +95,16 @@ export async function clockIn(db: Db, actor: Actor, bookingId: number | undefine
       if (!on) throw new HttpError(422, "not_on_booking", "You are not booked on that session", [{ field: "bookingId", rule: "assigned", message: "Pick one of your sessions" }]);
       const [booking] = await tx.select().from(bookings).where(eq(bookings.id, bookingId));
       if (!booking || booking.status === "cancelled") throw new HttpError(422, "booking_cancelled", "That session was cancelled");
+      // Only a session that is booked for real and happening about now: not a hold, not one next year.
+      if (booking.status !== "confirmed" && booking.status !== "in_session") {
+        const why = booking.status === "hold" ? "it is only a hold" : `it is ${booking.status.replace("_", " ")}`;
+        throw new HttpError(422, "session_not_confirmed", `Clock in against a confirmed session; ${why}`, [{ field: "bookingId", rule: "confirmed", message: "Pick a confirmed session" }]);
+      }
+      if (!nearBookedTime(booking.startsAt, booking.endsAt, now, 0)) {
+        throw new HttpError(422, "not_session_time", `You can clock into a session from ${dateWindow.startEarlyMinutes} minutes before it starts until it ends; this one is booked for ${booking.startsAt.toISOString()}`, [
+          { field: "bookingId", rule: "near_now", message: "Pick a session running now or starting within the hour" },
+        ]);
+      }
     }
     await assertPeriodsOpen(tx, payroll, [now]);
     const [created] = await tx

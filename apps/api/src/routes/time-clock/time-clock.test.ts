@@ -1,7 +1,7 @@
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { and, eq, isNull } from "drizzle-orm";
 import { DateTime } from "luxon";
-import { auditEvents, staffProfiles, timeEntries } from "@takeup/db";
+import { auditEvents, bookingEngineers, bookings, staffProfiles, timeEntries } from "@takeup/db";
 import { createTestApp, type TestApp } from "../../test/harness.ts";
 import { demo } from "../../test/demo.ts";
 import { clockState } from "./time-clock.service.ts";
@@ -47,6 +47,11 @@ describe("the time clock", () => {
     expect(refused.status).toBe(422);
     expect(refused.body.error.details[0].field).toBe("bookingId");
     const mine = all.find((b) => b.engineers.some((e) => e.name === "Priya Oduya") && b.status === "confirmed")!;
+    // Clock-in takes a session near now (date-window.test.ts): this one is moved to have begun ten minutes ago.
+    const startsAt = new Date(Date.now() - 10 * 60_000);
+    const endsAt = new Date(startsAt.getTime() + 3 * 3_600_000);
+    await t.db.update(bookings).set({ startsAt, endsAt }).where(eq(bookings.id, mine.id));
+    await t.db.update(bookingEngineers).set({ startsAt, endsAt }).where(eq(bookingEngineers.bookingId, mine.id));
     const ok = await priya.post("/api/time-clock/clock-in").send({ bookingId: mine.id });
     expect(ok.status).toBe(201);
     expect(ok.body).toMatchObject({ kind: "session", booking: { id: mine.id } });

@@ -8,6 +8,7 @@ export const flagLabels: Record<Flag, string> = {
   missing_break: "No break recorded",
   pending_edit: "Correction waiting",
   no_pay_rate: "No pay rate",
+  self_approved: "Self-approved correction",
 };
 
 // Problems that stop pay are marked strongest; a waiting correction is only news.
@@ -16,6 +17,7 @@ const flagStyles: Record<Flag, string> = {
   no_pay_rate: "border-alert/40 bg-alert-wash text-alert",
   missing_break: "border-rust/30 bg-rust-wash text-rust-deep",
   pending_edit: "border-line-strong border-dashed bg-card text-ink",
+  self_approved: "border-rust/30 bg-rust-wash text-rust-deep",
 };
 
 export function EntryFlags({ flags }: { flags: readonly Flag[] }) {

@@ -73,6 +73,7 @@ export const payRate = (over: Partial<PayRateDto> = {}): PayRateDto => ({
   code: "engineer",
   hourlyRateCents: 2800,
   effectiveFrom: "2026-01-05",
+  usedByLockedPeriod: false,
   ...over,
 });
 

@@ -45,7 +45,7 @@ export function PayRatesPage() {
           ) : (
             <p className="text-sm text-muted">Only the owner adds or changes pay rates.</p>
           )}
-          <PayRatesTable rates={rates.data} currency={studio.data.currency} />
+          <PayRatesTable rates={rates.data} currency={studio.data.currency} canCorrect={canEdit} />
         </div>
       )}
     </>

@@ -34,6 +34,16 @@ describe("PayPeriodReview", () => {
     expect(flags.getByText("Priya Oduya has a correction waiting for a decision: “Left later than clocked”")).toBeInTheDocument();
   });
 
+  it("shows the bookkeeper an owner's self-approved correction among the flags", () => {
+    mockApi([]);
+    const message = "Mara Linden approved a correction to their own time (no other owner to ask); check it before approving the period";
+    renderWithApp(<PayPeriodReview review={review({ flags: [{ kind: "self_approved", staffName: "Mara Linden", entryId: 700, message }] })} role="bookkeeper" currency="USD" />);
+
+    const flags = within(screen.getByRole("region", { name: "Flags (1)" }));
+    expect(flags.getByText("Self-approved correction")).toBeInTheDocument();
+    expect(flags.getByText(message)).toBeInTheDocument();
+  });
+
   it("offers a manager approval, never locking or the export", async () => {
     const { calls } = mockApi([
       { method: "POST", path: "/api/pay-periods/9/approve", reply: { body: period({ status: "approved", approvedByName: "Theo Vance", approvedAt: "2026-12-07T16:00:00.000Z" }) } },

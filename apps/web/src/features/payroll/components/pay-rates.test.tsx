@@ -20,6 +20,56 @@ describe("PayRatesTable", () => {
   });
 });
 
+describe("correcting a pay rate", () => {
+  it("lets the owner correct a rate no locked period used, with a reason, and says which ones a locked period used", async () => {
+    const { calls } = mockApi([
+      { method: "PATCH", path: "/api/pay-rates/3", reply: { body: payRate({ hourlyRateCents: 2850 }) } },
+    ]);
+    const { user } = renderWithApp(<PayRatesTable rates={[payRate(), payRate({ id: 4, staffName: "Jo Kettering", code: "assistant", usedByLockedPeriod: true })]} currency="USD" canCorrect />);
+
+    const rows = within(screen.getByRole("table", { name: "Pay rates" })).getAllByRole("row").slice(1);
+    expect(rows[0]).toHaveTextContent("Used by a locked period");
+    expect(within(rows[0]!).queryByRole("button", { name: /Correct/ })).not.toBeInTheDocument();
+    await user.click(within(rows[1]!).getByRole("button", { name: "Correct: Priya Oduya, engineer from 2026-01-05" }));
+    const dialog = within(screen.getByRole("dialog", { name: "Correct this pay rate" }));
+    expect(dialog.getByLabelText("Rate per hour")).toHaveValue("28.00");
+    await user.clear(dialog.getByLabelText("Rate per hour"));
+    await user.type(dialog.getByLabelText("Rate per hour"), "28.50");
+    await user.click(dialog.getByRole("button", { name: "Save correction" }));
+    expect(await dialog.findByText("Say why the rate is corrected")).toBeInTheDocument();
+    expect(calls).toHaveLength(0);
+    await user.type(dialog.getByLabelText("Reason"), "Typed 28 instead of 28.50");
+    await user.click(dialog.getByRole("button", { name: "Save correction" }));
+
+    expect(await screen.findByText("Priya Oduya: engineer corrected to $28.50 an hour from Monday 5 January 2026")).toBeInTheDocument();
+    expect(calls[0]).toMatchObject({ method: "PATCH", path: "/api/pay-rates/3", body: { hourlyRateCents: 2850, effectiveFrom: "2026-01-05", reason: "Typed 28 instead of 28.50" } });
+    expect(screen.queryByRole("dialog")).not.toBeInTheDocument();
+  });
+
+  it("offers no correction to the bookkeeper, who only reads the rates", () => {
+    renderWithApp(<PayRatesTable rates={[payRate()]} currency="USD" />);
+    expect(screen.queryByRole("button", { name: /Correct/ })).not.toBeInTheDocument();
+  });
+
+  it("shows the API's refusal of a duplicate date in the dialog", async () => {
+    mockApi([
+      {
+        method: "PATCH",
+        path: "/api/pay-rates/3",
+        reply: { status: 409, body: { error: { code: "duplicate_pay_rate", message: "Priya Oduya already has an engineer rate from 2026-02-02; correct that rate instead of adding another", details: [{ field: "effectiveFrom", rule: "unique", message: "One rate per person, code and date" }] } } },
+      },
+    ]);
+    const { user } = renderWithApp(<PayRatesTable rates={[payRate()]} currency="USD" canCorrect />);
+    await user.click(screen.getByRole("button", { name: /Correct: Priya Oduya/ }));
+    const dialog = within(screen.getByRole("dialog", { name: "Correct this pay rate" }));
+    await user.clear(dialog.getByLabelText("From"));
+    await user.type(dialog.getByLabelText("From"), "2026-02-02");
+    await user.type(dialog.getByLabelText("Reason"), "Wrong month");
+    await user.click(dialog.getByRole("button", { name: "Save correction" }));
+    expect(await dialog.findByText("One rate per person, code and date")).toBeInTheDocument();
+  });
+});
+
 describe("PayRateForm", () => {
   beforeEach(() => {
     vi.useFakeTimers({ toFake: ["Date"] });

@@ -2,9 +2,11 @@ import { useMemo, useState } from "react";
 import { useForm } from "react-hook-form";
 import { zodResolver } from "@hookform/resolvers/zod";
 import { z } from "zod";
-import { createPayRateInput, formatMoney, roleLabels, type PayRateDto, type StaffMemberDto } from "@takeup/domain";
+import { correctPayRateInput, createPayRateInput, formatMoney, roleLabels, type PayRateDto, type StaffMemberDto } from "@takeup/domain";
 import { Button } from "../../../components/ui/button.tsx";
 import { DataTable, type ColumnDef } from "../../../components/ui/data-table.tsx";
+import { Dialog, DialogActions } from "../../../components/ui/dialog.tsx";
+import { Textarea } from "../../../components/ui/textarea.tsx";
 import { FormAlert, FormField } from "../../../components/ui/form-field.tsx";
 import { Input } from "../../../components/ui/input.tsx";
 import { Select } from "../../../components/ui/select.tsx";
@@ -12,11 +14,16 @@ import { useToast } from "../../../components/ui/use-toast.ts";
 import { ApiError } from "../../../lib/api-client.ts";
 import { applyApiErrors } from "../../../lib/form-errors.ts";
 import { formatDayLong, formatDayShort, studioToday } from "../../../lib/studio-time.ts";
-import { toMinorUnits } from "../../../lib/units.ts";
+import { fromMinorUnits, toMinorUnits } from "../../../lib/units.ts";
+import { useCorrectPayRate } from "../api/correct-pay-rate.ts";
 import { useCreatePayRate } from "../api/create-pay-rate.ts";
 
-/** Every rate with the date it applies from; a newer row for the same person and code takes over on its date. */
-export function PayRatesTable({ rates, currency }: { rates: PayRateDto[]; currency: string }) {
+/**
+ * Every rate with the date it applies from; a newer row for the same person and code takes over on its date.
+ * The owner can correct a rate's amount or date until a locked period has been computed with it.
+ */
+export function PayRatesTable({ rates, currency, canCorrect = false }: { rates: PayRateDto[]; currency: string; canCorrect?: boolean }) {
+  const [correcting, setCorrecting] = useState<PayRateDto | null>(null);
   const columns = useMemo<ColumnDef<PayRateDto>[]>(
     () => [
       { id: "person", header: "Person", accessorFn: (r) => r.staffName, cell: ({ row }) => <span className="font-medium">{row.original.staffName}</span> },
@@ -28,9 +35,35 @@ export function PayRatesTable({ rates, currency }: { rates: PayRateDto[]; curren
         accessorFn: (r) => r.effectiveFrom,
         cell: ({ row }) => `${formatDayShort(row.original.effectiveFrom)} ${row.original.effectiveFrom.slice(0, 4)}`,
       },
+      ...(canCorrect
+        ? [
+            {
+              id: "correct",
+              header: () => <span className="sr-only">Correction</span>,
+              enableSorting: false,
+              cell: ({ row }: { row: { original: PayRateDto } }) =>
+                row.original.usedByLockedPeriod ? (
+                  <span className="text-xs text-muted">Used by a locked period</span>
+                ) : (
+                  <Button variant="secondary" size="sm" onClick={() => setCorrecting(row.original)} aria-label={`Correct: ${row.original.staffName}, ${row.original.code} from ${row.original.effectiveFrom}`}>
+                    Correct
+                  </Button>
+                ),
+            } satisfies ColumnDef<PayRateDto>,
+          ]
+        : []),
     ],
-    [currency],
+    [currency, canCorrect],
   );
+  return (
+    <>
+      {correcting ? <CorrectPayRateDialog rate={correcting} currency={currency} onClose={() => setCorrecting(null)} /> : null}
+      <PayRatesTableBody rates={rates} columns={columns} />
+    </>
+  );
+}
+
+function PayRatesTableBody({ rates, columns }: { rates: PayRateDto[]; columns: ColumnDef<PayRateDto>[] }) {
   return (
     <DataTable
       label="Pay rates"
@@ -41,6 +74,65 @@ export function PayRatesTable({ rates, currency }: { rates: PayRateDto[]; curren
       initialSorting={[{ id: "person", desc: false }]}
       emptyMessage="No pay rates yet. Time is only paid once a rate is set."
     />
+  );
+}
+
+function correctionForm(currency: string) {
+  return z.object({
+    rate: payRateForm(currency).shape.rate,
+    effectiveFrom: z.iso.date("Choose the first day the rate applies"),
+    reason: correctPayRateInput.shape.reason,
+  });
+}
+type CorrectionValues = z.infer<ReturnType<typeof correctionForm>>;
+
+/** Replaces a mistaken amount or date, with a reason the activity log keeps. */
+function CorrectPayRateDialog({ rate, currency, onClose }: { rate: PayRateDto; currency: string; onClose: () => void }) {
+  const toast = useToast();
+  const [formError, setFormError] = useState<string | null>(null);
+  const schema = useMemo(() => correctionForm(currency), [currency]);
+  const { register, handleSubmit, setError, formState } = useForm<CorrectionValues>({
+    resolver: zodResolver(schema),
+    defaultValues: { rate: fromMinorUnits(rate.hourlyRateCents, currency), effectiveFrom: rate.effectiveFrom, reason: "" },
+  });
+  const correct = useCorrectPayRate();
+  const onSubmit = handleSubmit((values) => {
+    setFormError(null);
+    correct.mutate(
+      { id: rate.id, hourlyRateCents: toMinorUnits(values.rate, currency) ?? 0, effectiveFrom: values.effectiveFrom, reason: values.reason.trim() },
+      {
+        onSuccess: (saved) => {
+          toast(`${saved.staffName}: ${saved.code} corrected to ${formatMoney(saved.hourlyRateCents, currency)} an hour from ${formatDayLong(saved.effectiveFrom)}`);
+          onClose();
+        },
+        onError: (error) => setFormError(applyApiErrors(inFormTerms(error), setError, { fields: ["rate", "effectiveFrom", "reason"] })),
+      },
+    );
+  });
+  const { errors } = formState;
+  return (
+    <Dialog open onClose={onClose} title="Correct this pay rate" description={`${rate.staffName}, ${rate.code}. A mistake only: a raise is a new rate from a later date.`} size="sm">
+      <form onSubmit={onSubmit} noValidate className="flex flex-col gap-4">
+        <FormAlert message={formError} />
+        <FormField label="Rate per hour" hint={`In ${currency}`} error={errors.rate?.message}>
+          {(field) => <Input {...field} {...register("rate")} inputMode="decimal" autoComplete="off" />}
+        </FormField>
+        <FormField label="From" error={errors.effectiveFrom?.message}>
+          {(field) => <Input {...field} {...register("effectiveFrom")} type="date" />}
+        </FormField>
+        <FormField label="Reason" hint="Kept in the activity log" error={errors.reason?.message}>
+          {(field) => <Textarea {...field} {...register("reason")} rows={2} />}
+        </FormField>
+        <DialogActions>
+          <Button variant="secondary" onClick={onClose}>
+            Cancel
+          </Button>
+          <Button type="submit" pending={correct.isPending}>
+            Save correction
+          </Button>
+        </DialogActions>
+      </form>
+    </Dialog>
   );
 }
 

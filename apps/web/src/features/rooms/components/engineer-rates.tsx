@@ -13,8 +13,10 @@ import { Select } from "../../../components/ui/select.tsx";
 import { useToast } from "../../../components/ui/use-toast.ts";
 import { ApiError } from "../../../lib/api-client.ts";
 import { applyApiErrors } from "../../../lib/form-errors.ts";
-import { formatStudioStamp, studioLocalDateTimeToIso } from "../../../lib/studio-time.ts";
-import { toMinorUnits } from "../../../lib/units.ts";
+import { formatStudioStamp, studioLocalDateTimeToIso, studioParts } from "../../../lib/studio-time.ts";
+import { fromMinorUnits, toMinorUnits } from "../../../lib/units.ts";
+import { Textarea } from "../../../components/ui/textarea.tsx";
+import { useCorrectEngineerRate } from "../api/correct-engineer-rate.ts";
 import { useCreateEngineerRate } from "../api/create-engineer-rate.ts";
 import { engineerGradeLabels } from "./room-labels.ts";
 
@@ -53,6 +55,7 @@ type EngineerRatesProps = {
 
 export function EngineerRates({ rates, engineers, currency, timeZone, canEdit }: EngineerRatesProps) {
   const [adding, setAdding] = useState(false);
+  const [correcting, setCorrecting] = useState<EngineerRateDto | null>(null);
   const standings = useMemo(() => rateStandings(rates), [rates]);
   const columns = useMemo<ColumnDef<EngineerRateDto>[]>(
     () => [
@@ -86,8 +89,22 @@ export function EngineerRates({ rates, engineers, currency, timeZone, canEdit }:
           return <Badge tone={badge.tone}>{badge.label}</Badge>;
         },
       },
+      ...(canEdit
+        ? [
+            {
+              id: "correct",
+              header: () => <span className="sr-only">Correction</span>,
+              enableSorting: false,
+              cell: ({ row }: { row: { original: EngineerRateDto } }) => (
+                <Button variant="secondary" size="sm" onClick={() => setCorrecting(row.original)} aria-label={`Correct: ${rateName(row.original)} from ${formatStudioStamp(row.original.effectiveFrom, timeZone)}`}>
+                  Correct
+                </Button>
+              ),
+            } satisfies ColumnDef<EngineerRateDto>,
+          ]
+        : []),
     ],
-    [currency, timeZone, standings],
+    [currency, timeZone, standings, canEdit],
   );
 
   return (
@@ -110,12 +127,78 @@ export function EngineerRates({ rates, engineers, currency, timeZone, canEdit }:
         initialSorting={[{ id: "from", desc: true }]}
         emptyMessage="No engineer rates yet: engineer time cannot be quoted until there is one per grade."
       />
+      {correcting ? <CorrectEngineerRateDialog rate={correcting} currency={currency} timeZone={timeZone} onClose={() => setCorrecting(null)} /> : null}
       {canEdit ? (
         <Dialog open={adding} onClose={() => setAdding(false)} title="Add an engineer rate" size="md">
           <EngineerRateForm engineers={engineers} currency={currency} timeZone={timeZone} onDone={() => setAdding(false)} />
         </Dialog>
       ) : null}
     </div>
+  );
+}
+
+const rateName = (r: EngineerRateDto) => r.staffName ?? `any ${engineerGradeLabels[r.grade].toLowerCase()}`;
+
+const correctionForm = z.object({
+  hourlyRate: z.string().trim().regex(/^\d+(\.\d+)?$/, "Enter an amount such as 45 or 45.50"),
+  effectiveFrom: z.string().min(1, "Choose when the rate starts"),
+  reason: z.string().trim().min(3, "Say why the rate is corrected").max(500, "Use at most 500 characters"),
+});
+type CorrectionValues = z.infer<typeof correctionForm>;
+
+/** Replaces a mistaken amount or start, with a reason the activity log keeps; quotes already given keep theirs. */
+function CorrectEngineerRateDialog({ rate, currency, timeZone, onClose }: { rate: EngineerRateDto; currency: string; timeZone: string; onClose: () => void }) {
+  const toast = useToast();
+  const correct = useCorrectEngineerRate();
+  const [formError, setFormError] = useState<string | null>(null);
+  const start = studioParts(rate.effectiveFrom, timeZone);
+  const { register, handleSubmit, setError, formState } = useForm<CorrectionValues>({
+    resolver: zodResolver(correctionForm),
+    defaultValues: { hourlyRate: fromMinorUnits(rate.hourlyRateCents, currency), effectiveFrom: `${start.date}T${start.time}`, reason: "" },
+  });
+  const submit = handleSubmit(async (values) => {
+    setFormError(null);
+    const effectiveFrom = studioLocalDateTimeToIso(values.effectiveFrom, timeZone);
+    if (!effectiveFrom) {
+      setError("effectiveFrom", { message: "Choose when the rate starts" });
+      return;
+    }
+    try {
+      const saved = await correct.mutateAsync({ id: rate.id, hourlyRateCents: toMinorUnits(values.hourlyRate, currency) ?? 0, effectiveFrom, reason: values.reason.trim() });
+      toast(`Rate for ${rateName(saved)} corrected to ${formatMoney(saved.hourlyRateCents, currency)} an hour`);
+      onClose();
+    } catch (error) {
+      const renamed =
+        error instanceof ApiError
+          ? new ApiError(error.status, error.code, error.message, error.details.map((d) => ({ ...d, field: d.field === "hourlyRateCents" ? "hourlyRate" : d.field })))
+          : error;
+      setFormError(applyApiErrors(renamed, setError, { fields: ["hourlyRate", "effectiveFrom", "reason"] }));
+    }
+  });
+  const { errors } = formState;
+  return (
+    <Dialog open onClose={onClose} title="Correct this engineer rate" description={`Billed for ${rateName(rate)}. A mistake only: a new price is a new rate. Bookings already quoted keep their quotes.`} size="sm">
+      <form onSubmit={submit} noValidate className="flex flex-col gap-4">
+        <FormAlert message={formError} />
+        <FormField label="Hourly rate" hint={`${currency} per hour billed to the client.`} error={errors.hourlyRate?.message}>
+          {(field) => <Input {...field} {...register("hourlyRate")} inputMode="decimal" autoComplete="off" />}
+        </FormField>
+        <FormField label="Effective from" hint="Studio time." error={errors.effectiveFrom?.message}>
+          {(field) => <Input {...field} {...register("effectiveFrom")} type="datetime-local" step={60} />}
+        </FormField>
+        <FormField label="Reason" hint="Kept in the activity log" error={errors.reason?.message}>
+          {(field) => <Textarea {...field} {...register("reason")} rows={2} />}
+        </FormField>
+        <DialogActions>
+          <Button variant="secondary" onClick={onClose}>
+            Cancel
+          </Button>
+          <Button type="submit" pending={formState.isSubmitting}>
+            Save correction
+          </Button>
+        </DialogActions>
+      </form>
+    </Dialog>
   );
 }
 

@@ -41,6 +41,46 @@ describe("CorrectionsReview", () => {
     expect(calls.some((c) => c.path === "/api/time-entry-edits?status=pending")).toBe(true);
   });
 
+  it("offers no Approve on a manager's own time, says who decides, and names who asked for someone else's", async () => {
+    mockApi([
+      {
+        method: "GET",
+        path: "/api/time-entry-edits",
+        reply: {
+          body: [
+            edit({ id: 41, staffName: "Theo Vance", staffUserId: "u-theo", proposedByName: "Theo Vance", approvalRule: "own_time", reason: "trust me" }),
+            edit({ id: 42, proposedByName: "Mara Linden" }),
+          ],
+        },
+      },
+    ]);
+    renderWithApp(<CorrectionsReview timeZone={timeZone} />);
+
+    const own = await screen.findByRole("button", { name: "Approve: Theo Vance, Mon 7 Dec" });
+    expect(own).toBeDisabled();
+    expect(screen.getByText("Your own time: an owner or another manager decides.")).toBeInTheDocument();
+    expect(screen.getByRole("button", { name: "Reject: Theo Vance, Mon 7 Dec" })).toBeEnabled();
+    expect(screen.getByRole("button", { name: "Approve: Priya Oduya, Mon 7 Dec" })).toBeEnabled();
+    expect(screen.getByText("asked by Mara Linden")).toBeInTheDocument();
+  });
+
+  it("asks the sole owner to confirm a self-approval, which the bookkeeper will see flagged", async () => {
+    const { calls } = mockApi([
+      { method: "GET", path: "/api/time-entry-edits", reply: { body: [edit({ id: 43, staffName: "Mara Linden", staffUserId: "u-mara", proposedByName: "Mara Linden", approvalRule: "self_approval" })] } },
+      { method: "POST", path: "/api/time-entry-edits/43/approve", reply: { body: edit({ id: 43, status: "approved", selfApproved: true }) } },
+    ]);
+    const { user } = renderWithApp(<CorrectionsReview timeZone={timeZone} />);
+
+    await user.click(await screen.findByRole("button", { name: "Approve: Mara Linden, Mon 7 Dec" }));
+    const dialog = within(screen.getByRole("dialog", { name: "Approve your own correction?" }));
+    expect(dialog.getByText(/recorded as self-approved, and the bookkeeper sees it flagged/)).toBeInTheDocument();
+    expect(calls.some((c) => c.method === "POST")).toBe(false);
+    await user.click(dialog.getByRole("button", { name: "Self-approve" }));
+
+    expect(await screen.findByText("Correction self-approved: Mara Linden, Mon 7 Dec")).toBeInTheDocument();
+    expect(calls.find((c) => c.method === "POST")).toMatchObject({ path: "/api/time-entry-edits/43/approve" });
+  });
+
   it("rejects with an optional note", async () => {
     const { calls } = mockApi([
       { method: "GET", path: "/api/time-entry-edits", reply: { body: [edit()] } },

@@ -41,11 +41,29 @@ export function CorrectionsReview({ timeZone }: { timeZone: string }) {
   );
 }
 
+/** Whose time it is, and who asked when that was someone else. */
+function PersonCell({ edit }: { edit: TimeEntryEditDto }) {
+  return (
+    <span className="flex flex-col">
+      <span className="font-medium">{edit.staffName}</span>
+      {edit.proposedByName && edit.proposedByName !== edit.staffName ? <span className="text-xs text-muted">asked by {edit.proposedByName}</span> : null}
+    </span>
+  );
+}
+
+/** Why the viewer may not approve (decision 011), or null when they may. */
+const whoDecides: Partial<Record<TimeEntryEditDto["approvalRule"], string>> = {
+  own_time: "Your own time: an owner or another manager decides.",
+  another_owner: "Your own time: another owner decides.",
+  owners_only: "An owner's time: another owner decides.",
+  cannot_decide: "An owner or a manager decides.",
+};
+
 const reasonCell = (edit: TimeEntryEditDto) => <p className="max-w-xs min-w-48 break-words whitespace-normal">{edit.reason}</p>;
 
 /** Who, which day, what would change and why: the columns both lists begin with. */
 const correctionColumns = (timeZone: string): ColumnDef<TimeEntryEditDto>[] => [
-      { id: "person", header: "Person", accessorFn: (e) => e.staffName, cell: ({ row }) => <span className="font-medium">{row.original.staffName}</span> },
+      { id: "person", header: "Person", accessorFn: (e) => e.staffName, cell: ({ row }) => <PersonCell edit={row.original} /> },
       { id: "day", header: "Day", accessorFn: (e) => e.proposed.startedAt, cell: ({ row }) => formatDayShort(editDay(row.original, timeZone)) },
       { id: "change", header: "Change", enableSorting: false, cell: ({ row }) => <EditChange edit={row.original} timeZone={timeZone} /> },
       { id: "reason", header: "Reason", enableSorting: false, accessorFn: (e) => e.reason, cell: ({ row }) => reasonCell(row.original) },
@@ -137,6 +155,7 @@ function Decision({ edit, timeZone }: { edit: TimeEntryEditDto; timeZone: string
   return (
     <div className="flex max-w-xs min-w-44 flex-col items-start gap-1 whitespace-normal">
       <EditStatusBadge status={edit.status} />
+      {edit.selfApproved ? <span className="rounded-full border border-rust/30 bg-rust-wash px-2 py-0.5 text-xs font-medium text-rust-deep">Self-approved</span> : null}
       <span className="text-sm">
         {edit.decidedByName ?? "Someone"}
         {edit.decidedAt ? `, ${formatStudioDayTime(edit.decidedAt, timeZone)}` : ""}
@@ -157,6 +176,7 @@ function CorrectionCards({ label, edits, timeZone, children }: CorrectionCardsPr
           <p className="font-semibold">
             {edit.staffName} · {formatDayShort(editDay(edit, timeZone))}
           </p>
+          {edit.proposedByName && edit.proposedByName !== edit.staffName ? <p className="text-xs text-muted">Asked by {edit.proposedByName}</p> : null}
           <EditChange edit={edit} timeZone={timeZone} />
           <p className="text-sm break-words">“{edit.reason}”</p>
           {children(edit)}
@@ -170,24 +190,58 @@ function DecisionActions({ edit, timeZone }: { edit: TimeEntryEditDto; timeZone:
   const toast = useToast();
   const approve = useApproveEdit();
   const [rejecting, setRejecting] = useState(false);
+  const [confirmingSelf, setConfirmingSelf] = useState(false);
   const name = editName(edit, timeZone);
+  const blocked = whoDecides[edit.approvalRule];
   const onApprove = () =>
     approve.mutate(
       { id: edit.id },
       {
-        onSuccess: () => toast(`Correction approved: ${name}`),
+        onSuccess: () => {
+          setConfirmingSelf(false);
+          toast(edit.approvalRule === "self_approval" ? `Correction self-approved: ${name}` : `Correction approved: ${name}`);
+        },
         onError: (error) => toast(inStudioTime(errorMessage(error), timeZone), "error"),
       },
     );
   return (
-    <div className="flex gap-2">
-      <Button size="sm" onClick={onApprove} pending={approve.isPending} aria-label={`Approve: ${name}`}>
-        Approve
-      </Button>
-      <Button variant="secondary" size="sm" onClick={() => setRejecting(true)} disabled={approve.isPending} aria-label={`Reject: ${name}`}>
-        Reject
-      </Button>
+    <div className="flex max-w-xs flex-col items-start gap-1 whitespace-normal">
+      <div className="flex gap-2">
+        <Button
+          size="sm"
+          onClick={edit.approvalRule === "self_approval" ? () => setConfirmingSelf(true) : onApprove}
+          pending={approve.isPending}
+          disabled={blocked !== undefined}
+          aria-label={`Approve: ${name}`}
+        >
+          Approve
+        </Button>
+        {edit.approvalRule !== "cannot_decide" ? (
+          <Button variant="secondary" size="sm" onClick={() => setRejecting(true)} disabled={approve.isPending} aria-label={`Reject: ${name}`}>
+            Reject
+          </Button>
+        ) : null}
+      </div>
+      {blocked ? <p className="text-xs text-muted">{blocked}</p> : null}
       {rejecting ? <RejectDialog edit={edit} name={name} timeZone={timeZone} onClose={() => setRejecting(false)} /> : null}
+      {confirmingSelf ? (
+        <Dialog
+          open
+          onClose={() => setConfirmingSelf(false)}
+          title="Approve your own correction?"
+          description="You are the studio's only owner, so nobody else can decide it. It is recorded as self-approved, and the bookkeeper sees it flagged in the pay period and in the export."
+          size="sm"
+        >
+          <DialogActions>
+            <Button variant="secondary" onClick={() => setConfirmingSelf(false)}>
+              Cancel
+            </Button>
+            <Button onClick={onApprove} pending={approve.isPending}>
+              Self-approve
+            </Button>
+          </DialogActions>
+        </Dialog>
+      ) : null}
     </div>
   );
 }
