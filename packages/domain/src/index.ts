@@ -36,7 +36,7 @@ export { computeOvertime } from "./payroll/compute-overtime.ts";
 export { roundPunch } from "./payroll/round-punch.ts";
 export { clockedMinutesByWorkday } from "./payroll/split-entries.ts";
 export { payPeriodContaining, payPeriodForWorkday, type PayPeriod, type PayPeriodSchedule } from "./payroll/pay-periods.ts";
-export { summarisePayPeriod, type PayPeriodSummary, type PayPeriodStaffTotals } from "./payroll/pay-period-summary.ts";
+export { straddlingWeekNote, summarisePayPeriod, type PayPeriodSummary, type PayPeriodStaffTotals, type PeriodWorkweek } from "./payroll/pay-period-summary.ts";
 export { formatIsoWeek, isoWeek, type IsoWeekDate } from "./payroll/iso-week.ts";
 export type * from "./payroll/types.ts";
 export * from "./contracts/rooms.ts";
