@@ -18,6 +18,7 @@ export * from "./bookings/cancellation-fee.ts";
 // Pricing: quotes for room time, premiums and engineer time.
 export { quote } from "./pricing/quote.ts";
 export { maxBookingMinutes, validateBooking } from "./pricing/validate-booking.ts";
+export { lockoutSpan } from "./pricing/lockout.ts";
 export { validateRateCard } from "./pricing/validate-rate-card.ts";
 export { PricingError, type PricingProblem, type PricingProblemCode } from "./pricing/pricing-problem.ts";
 export type {
