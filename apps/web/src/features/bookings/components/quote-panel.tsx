@@ -221,7 +221,7 @@ function QuoteForm({ initial, rooms, clients, engineers, equipment, timeZone, on
           <input type="checkbox" className="mt-0.5 size-4 accent-rust" {...register("lockout")} />
           <span>
             <span className="font-medium">Lockout</span>
-            <span className="block text-xs text-muted">The room is the client&apos;s around the clock for whole days, each at the day rate: no hourly time and no after-hours premium.</span>
+            <span className="block text-xs text-muted">The room is held around the clock for whole days, each at the day rate: no hourly time and no after-hours premium.</span>
           </span>
         </label>
         {lockout ? (
