@@ -31,7 +31,7 @@ export function isInWindow(minute: number, window: LocalTimeWindow): boolean {
 /** Every instant during one local day at which the price could change: midnight, the window's edges, offset changes. */
 function cutsForDay(dayStart: DateTime, dayEnd: DateTime, window: LocalTimeWindow, timeZone: string): number[] {
   const changes = offsetChanges(dayStart.toMillis(), dayEnd.toMillis(), timeZone);
-  const offsets = offsetsDuring(dayStart, dayEnd, timeZone);
+  const offsets = offsetsDuring(dayStart, dayEnd, timeZone, changes);
   const edges = [window.startMinute, window.endMinute].filter((minute) => minute > 0 && minute < 1440);
   return [dayStart.toMillis(), ...changes, ...edges.flatMap((minute) => wallClockInstants(dayStart, minute, offsets, timeZone))];
 }

@@ -61,8 +61,7 @@ export function wallClockInstants(dayStart: DateTime, minute: number, offsetsMin
 }
 
 /** The UTC offsets (minutes) in force at any moment of one studio day, and just before it. */
-export function offsetsDuring(dayStart: DateTime, dayEnd: DateTime, timeZone: string): number[] {
-  const changes = offsetChanges(dayStart.toMillis(), dayEnd.toMillis(), timeZone);
+export function offsetsDuring(dayStart: DateTime, dayEnd: DateTime, timeZone: string, changes = offsetChanges(dayStart.toMillis(), dayEnd.toMillis(), timeZone)): number[] {
   // The hour before midnight counts too: where a change lands on midnight, luxon may have read
   // midnight with the later offset, and the earlier reading of the day's first hour needs the other.
   const before = localAt(dayStart.toMillis() - 3_600_000, timeZone).offset;
