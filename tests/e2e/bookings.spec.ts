@@ -115,6 +115,33 @@ describe("booking a room", () => {
   });
 });
 
+describe("lockouts", () => {
+  it("the manager quotes and holds a three-day lockout and sees three day-rate lines, $850.00 each, $2,550.00 in all (docs/pricing.md)", async () => {
+    const { context, page } = await newPage();
+    await signIn(page, "manager@wrenfield.test");
+    const monday = day(8, 1);
+    await openDay(page, monday);
+    await cell(page, "Room A", monday, "10:00").click();
+    const panel = page.getByRole("dialog", { name: "New booking" });
+    await panel.getByRole("checkbox", { name: /^Lockout/ }).check();
+    await panel.getByLabel("Last day").fill(monday.plus({ days: 2 }).toISODate()!);
+    await panel.getByLabel("Client").selectOption({ label: "Lantern Static" });
+    await expect.poll(() => panel.getByText("Total $2,550.00").count()).toBe(1);
+    const days = ["Mon", "Tue", "Wed"].map((_, i) => `Lockout day — ${monday.plus({ days: i }).setLocale("en-GB").toFormat("ccc d LLL")}`);
+    for (const label of days) expect(await panel.getByText(label, { exact: true }).count()).toBe(1);
+    expect(await panel.getByText("$850.00", { exact: true }).count()).toBe(3);
+    await panel.getByRole("button", { name: "Pencil a hold" }).click();
+    await expect.poll(() => page.getByRole("button", { name: /^Lantern Static — Hold, Room A/ }).count()).toBeGreaterThan(0);
+
+    // The booking holds the whole days: the room is taken at 03:00 on the Tuesday too.
+    const held = (await api(page, `/api/bookings?from=${encodeURIComponent(monday.toISO()!)}&to=${encodeURIComponent(monday.plus({ days: 3 }).toISO()!)}`)).body as { lockout: boolean; startsAt: string; endsAt: string; quoteTotalCents: number }[];
+    expect(held.filter((b) => b.lockout).map((b) => [b.startsAt, b.endsAt, b.quoteTotalCents])).toEqual([
+      [new Date(monday.toISO()!).toISOString(), new Date(monday.plus({ days: 3 }).toISO()!).toISOString(), 255000],
+    ]);
+    await context.close();
+  });
+});
+
 describe("rate cards", () => {
   it("the owner adds a rate-card version; an existing booking keeps its price", async () => {
     const { context, page } = await newPage();

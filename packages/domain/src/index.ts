@@ -19,6 +19,7 @@ export * from "./bookings/cancellation-fee.ts";
 // Pricing: quotes for room time, premiums and engineer time.
 export { quote } from "./pricing/quote.ts";
 export { maxBookingMinutes, validateBooking } from "./pricing/validate-booking.ts";
+export { lockoutSpan } from "./pricing/lockout.ts";
 export { validateRateCard } from "./pricing/validate-rate-card.ts";
 export { PricingError, type PricingProblem, type PricingProblemCode } from "./pricing/pricing-problem.ts";
 export type {
@@ -37,7 +38,7 @@ export { computeOvertime } from "./payroll/compute-overtime.ts";
 export { roundPunch } from "./payroll/round-punch.ts";
 export { clockedMinutesByWorkday } from "./payroll/split-entries.ts";
 export { payPeriodContaining, payPeriodForWorkday, type PayPeriod, type PayPeriodSchedule } from "./payroll/pay-periods.ts";
-export { summarisePayPeriod, type PayPeriodSummary, type PayPeriodStaffTotals } from "./payroll/pay-period-summary.ts";
+export { straddlingWeekNote, summarisePayPeriod, type PayPeriodSummary, type PayPeriodStaffTotals, type PeriodWorkweek } from "./payroll/pay-period-summary.ts";
 export { formatIsoWeek, isoWeek, type IsoWeekDate } from "./payroll/iso-week.ts";
 export type * from "./payroll/types.ts";
 export * from "./contracts/rooms.ts";

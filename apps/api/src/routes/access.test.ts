@@ -48,7 +48,7 @@ beforeAll(async () => {
   const byTitle = (title: string) => all.find((b) => b.title === title)!.id;
   // Transitions on a wrapped booking answer 409, so walking the routes changes nothing.
   ids = {
-    clientBooking: byTitle("Tracking live, day 1 of 3"),
+    clientBooking: byTitle("Tracking live (lockout, 3 days)"),
     otherClientBooking: byTitle("Drums and bass"),
     engineerBooking: byTitle("Drums and bass"),
     otherEngineerBooking: byTitle("Mix, songs 1–3"),

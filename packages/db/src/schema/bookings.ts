@@ -35,6 +35,8 @@ export const bookings = mysqlTable(
     startsAt: utc("starts_at").notNull(),
     endsAt: utc("ends_at").notNull(),
     status: mysqlEnum("status", bookingStatuses).notNull(),
+    /** The room is the client's around the clock for whole studio days (the span is stored widened to them). */
+    lockout: boolean("lockout").notNull().default(false),
     /** A hold lapses at this instant unless it is confirmed first. */
     holdExpiresAt: utc("hold_expires_at"),
     /** A second hold waits behind this first hold and takes the slot when it lapses or is released. */

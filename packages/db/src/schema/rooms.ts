@@ -55,6 +55,10 @@ export const rateCardVersions = mysqlTable(
     afterHoursEndMinute: int("after_hours_end_minute").notNull(),
     afterHoursPremiumBp: int("after_hours_premium_bp").notNull(),
     weekendPremiumBp: int("weekend_premium_bp").notNull(),
+    /** What one lockout day costs; null means the day rate (docs/pricing.md, lockouts). */
+    lockoutDayRateCents: int("lockout_day_rate_cents"),
+    /** Whether a lockout day on a Saturday or Sunday carries the weekend premium. */
+    lockoutWeekendPremium: boolean("lockout_weekend_premium").notNull().default(false),
     note: varchar("note", { length: 200 }),
     createdByUserId: varchar("created_by_user_id", { length: 36 }).references(() => user.id),
     createdAt: createdAt(),

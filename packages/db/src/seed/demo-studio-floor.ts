@@ -2,7 +2,7 @@
 // Invented demo data; prices are the product brief's demo values.
 import { eq } from "drizzle-orm";
 import { DateTime } from "luxon";
-import { quote, rateCardFromVersion, type EngineerRates } from "@takeup/domain";
+import { lockoutSpan, quote, rateCardFromVersion, type EngineerRates } from "@takeup/domain";
 import type { Tx } from "../client.ts";
 import {
   bookingEngineers,
@@ -43,6 +43,8 @@ type Planned = {
   kit?: string[];
   title?: string;
   secondHoldBehind?: number;
+  /** Whole studio days around the clock, each at the day rate (docs/pricing.md, lockouts). */
+  lockout?: boolean;
 };
 
 const plan: Planned[] = [
@@ -54,8 +56,9 @@ const plan: Planned[] = [
   { room: "Room B", client: "Ines Halloran", day: 1, from: 10, to: 14, status: "confirmed", engineers: ["Sam Reyes"], title: "Guitar overdubs" },
   { room: "Room C", client: "Blue Hour Records", project: "Night Ferries", day: 2, from: 10, to: 20, status: "confirmed", engineers: ["Sam Reyes"], title: "Mix, songs 4–6" },
   { room: "Room B", client: "Copper Vale", project: "Low Country", day: 3, from: 18, to: 23, status: "confirmed", engineers: ["Jo Kettering"], title: "Late vocal session" },
-  // Next week: a three-day lockout in Room A, tracking live to 2-inch tape at 15 in/s.
-  ...[7, 8, 9].map((day) => ({ room: "Room A", client: "Lantern Static", project: "Harbour Lights", day, from: 10, to: 20, status: "confirmed" as const, engineers: ["Priya Oduya", "Jo Kettering"], kit: ["24-track 2-inch tape recorder"], title: `Tracking live, day ${day - 6} of 3` })),
+  // Next week: a three-day lockout in Room A (Monday to Wednesday, whole days at the day rate),
+  // tracking live to 2-inch tape at 15 in/s.
+  { room: "Room A", client: "Lantern Static", project: "Harbour Lights", day: 7, from: 10, to: 2 * 24 + 20, status: "confirmed", engineers: ["Priya Oduya", "Jo Kettering"], kit: ["24-track 2-inch tape recorder"], title: "Tracking live (lockout, 3 days)", lockout: true },
   { room: "Room B", client: "Lantern Static", project: "Harbour Lights", day: 10, from: 12, to: 16, status: "confirmed", engineers: ["Sam Reyes"], title: "Vocal overdubs" },
   { room: "Room C", client: "Ines Halloran", day: 11, from: 10, to: 18, status: "hold", engineers: ["Sam Reyes"], title: "Mix (pencilled)" },
   // A first hold and a second hold queued behind it on the same slot.
@@ -112,11 +115,12 @@ export async function seedStudioFloor(tx: Tx, now = new Date()) {
   const rates: EngineerRates = { engineer: demoEngineerRates.engineerCents, assistant: demoEngineerRates.assistantCents };
   let previousId = 0;
   for (const p of plan) {
-    const startsAt = monday.plus({ days: p.day, hours: p.from }).toJSDate();
-    const endsAt = monday.plus({ days: p.day, hours: p.to }).toJSDate();
+    const asked = { startsAt: monday.plus({ days: p.day, hours: p.from }).toJSDate(), endsAt: monday.plus({ days: p.day, hours: p.to }).toJSDate() };
+    // A lockout holds whole studio days, as the API stores it.
+    const { startsAt, endsAt } = p.lockout ? lockoutSpan(asked.startsAt, asked.endsAt, zone) : asked;
     const version = versions.get(p.room)!;
     const engineers = (p.engineers ?? []).map((name) => ({ id: staff.find((s) => s.name === name)!.userId, name, grade: grades.get(name)! }));
-    const priced = quote(rateCardFromVersion(p.room, version, rates, zone), { startsAt, endsAt, engineers }, { timeZone: zone, currency: "USD" });
+    const priced = quote(rateCardFromVersion(p.room, version, rates, zone), { startsAt, endsAt, engineers, lockout: p.lockout ?? false }, { timeZone: zone, currency: "USD" });
     const client = clients.find((c) => c.name === p.client)!;
     const queuedBehindId = p.secondHoldBehind ? previousId : null;
     const [created] = await tx
@@ -128,6 +132,7 @@ export async function seedStudioFloor(tx: Tx, now = new Date()) {
         startsAt,
         endsAt,
         status: p.status,
+        lockout: p.lockout ?? false,
         holdExpiresAt: p.status === "hold" && !queuedBehindId ? new Date(now.getTime() + 40 * 3_600_000) : null,
         queuedBehindId,
         rateCardVersionId: version.id,

@@ -29,6 +29,7 @@ export const quoteDto = z.object({
   billableMinutes: z.number(),
   lines: z.array(quoteLineDto),
   totalCents: z.number(),
+  lockout: z.boolean().optional(),
 });
 
 export const quoteInput = z.strictObject({
@@ -37,6 +38,8 @@ export const quoteInput = z.strictObject({
   endsAt: instant,
   engineerIds: engineerIds.optional(),
   equipmentIds: equipmentIds.optional(),
+  /** Whole studio days around the clock, each at one day's price (docs/pricing.md, lockouts). */
+  lockout: z.boolean().optional(),
 });
 export type QuoteInput = z.infer<typeof quoteInput>;
 
@@ -78,6 +81,8 @@ export const createBookingInput = z.strictObject({
   status: z.enum(["hold", "confirmed"]).default("hold"),
   /** Queue as a second hold behind a first hold on the same slot. */
   queueBehindHold: z.boolean().optional(),
+  /** Whole studio days around the clock, each at one day's price: the span is widened to whole days. */
+  lockout: z.boolean().optional(),
 });
 export type CreateBookingInput = z.input<typeof createBookingInput>;
 /** The parsed request, with defaults applied (status). */
@@ -131,6 +136,8 @@ export const bookingDto = z.object({
   startsAt: z.string(),
   endsAt: z.string(),
   status: z.enum(bookingStatuses),
+  /** Whole studio days around the clock (startsAt and endsAt are the days' local midnights). */
+  lockout: z.boolean(),
   holdExpiresAt: z.string().nullable(),
   /** For a second hold: the first hold it waits behind. */
   queuedBehindId: z.number().nullable(),

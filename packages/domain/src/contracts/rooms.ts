@@ -20,6 +20,9 @@ export const rateCardVersionDto = z.object({
   afterHoursEndMinute: z.number(),
   afterHoursPremiumBp: z.number(),
   weekendPremiumBp: z.number(),
+  /** Null: a lockout day costs the day rate. */
+  lockoutDayRateCents: z.number().nullable(),
+  lockoutWeekendPremium: z.boolean(),
   note: z.string().nullable(),
   createdAt: z.string(),
 });
@@ -37,6 +40,10 @@ export const createRateCardVersionInput = z.strictObject({
   afterHoursEndMinute: minuteOfDay,
   afterHoursPremiumBp: z.number().int().min(0).max(20000),
   weekendPremiumBp: z.number().int().min(0).max(20000),
+  /** What one lockout day costs; null or absent: the day rate. */
+  lockoutDayRateCents: z.number().int("The lockout day rate is in whole cents").min(1, "The lockout day rate is above zero, or left empty").max(100_000_000).nullable().optional(),
+  /** Whether a lockout day on a Saturday or Sunday carries the weekend premium. Default false. */
+  lockoutWeekendPremium: z.boolean().optional(),
   note: optionalText(200),
 });
 export type CreateRateCardVersionInput = z.infer<typeof createRateCardVersionInput>;

@@ -139,6 +139,28 @@ export const payPeriodStaffDto = z.object({
   regularRates: z.array(z.object({ workweekStart: z.string(), centsPerHour: z.number(), weightedAverage: z.boolean() })),
   rates: z.array(z.object({ code: z.string(), centsPerHour: z.number(), minutes: z.number() })),
   entryCount: z.number(),
+  /**
+   * Workweeks crossing the period's edge (29 CFR 778.106): straight time is paid in the period
+   * each hour was worked in, overtime in the period holding the week's last day.
+   */
+  straddlingWeeks: z.array(
+    z.object({
+      workweekStart: z.string(),
+      lastWorkday: z.string(),
+      /** Began before the period: its overtime premium is paid here. */
+      begunEarlier: z.boolean(),
+      /** Still open at the period's end: its overtime is paid in a later period. */
+      stillOpen: z.boolean(),
+      workedMinutes: z.number(),
+      overtimeMinutes: z.number(),
+      doubleTimeMinutes: z.number(),
+      weekOvertimeMinutes: z.number(),
+      weekDoubleTimeMinutes: z.number(),
+      overtimePremiumCents: z.number(),
+      doubleTimePremiumCents: z.number(),
+      note: z.string(),
+    }),
+  ),
 });
 export type PayPeriodStaffDto = z.infer<typeof payPeriodStaffDto>;
 

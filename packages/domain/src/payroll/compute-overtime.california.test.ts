@@ -70,7 +70,7 @@ describe("daily, weekly and seventh-day overtime (California Labor Code §510(a)
     expect(split(week)).toEqual([40, 9, 0]);
   });
 
-  it("does not carry a run of seven days across two workweeks (Lab. Code §510(a) counts within one workweek; Mendoza v. Nordstrom, 2017) [M]", () => {
+  it("does not carry a run of seven days across two workweeks (Lab. Code §510(a): \"the seventh day of work in any one workweek\", REFERENCES.md [S]; §500(b): a workweek is a fixed seven days starting the same day each week, from memory [M]) [D]", () => {
     const weeks = weeksOf(days(priya, "2026-02-05", [8, 8, 8, 8, 8, 8, 8]));
     expect(weeks.map((w) => w.seventhDayRuleApplied)).toEqual([false, false]);
     expect(weeks.map(split)).toEqual([[32, 0, 0], [24, 0, 0]]);

@@ -74,13 +74,18 @@ describe("roundPunch on other grids", () => {
     },
   );
 
+  it("rounds a punch exactly 7 min 30 s past the quarter hour up, 08:07:30 to 08:15 (University of Kansas HR rounding chart: 7 min 30 sec – 22 min 29 sec → 0.25) [S]", () => {
+    expect(roundPunch(on("08:07:30"), "15", zone)).toEqual(on("08:15"));
+    // And one second less rounds down: 7 min 29 s is still under the chart's 7 min 30 s.
+    expect(roundPunch(on("08:07:29"), "15", zone)).toEqual(on("08:00"));
+  });
+
   it.each([
     ["6", "08:03:00", "08:06"],
     ["5", "08:02:30", "08:05"],
-    ["15", "08:07:30", "08:15"],
     ["none", "08:00:30", "08:01"],
   ] as [PunchRounding, string, string][])(
-    "breaks a tie on the %s grid by rounding %s to the later point, %s (our stated tie policy; 29 CFR 785.48(b) sets none) [P]",
+    "breaks a tie on the %s grid by rounding %s to the later point, %s (our stated tie policy, the Kansas chart's quarter-hour rule carried to the other grids; 29 CFR 785.48(b) sets none) [D]",
     (grid, punched, rounded) => {
       expect(roundPunch(on(punched), grid, zone)).toEqual(on(rounded));
     },

@@ -1,4 +1,5 @@
 import { DateTime } from "luxon";
+import { earliestWallClockInstant } from "../shared/wall-clock.ts";
 import { wallClock } from "../shared/zone-offset.ts";
 import type { IsoWeekday, StudioCalendar } from "./types.ts";
 
@@ -76,24 +77,28 @@ export function workdayOf(at: Date, calendar: StudioCalendar): string {
 const workdayStarts = new Map<string, number>();
 
 /**
- * The instant a workday begins. If the start hour does not exist that day (a spring-forward
- * gap), luxon moves it to the first instant that does, which keeps days contiguous.
+ * The instant a workday begins: the first instant that day whose wall clock reads the start
+ * hour. In a fall-back hour, which reads twice, that is the earlier one, so the answer never
+ * depends on the date the program runs. If the start hour does not exist that day (a
+ * spring-forward gap), luxon moves it to the first instant that does, which keeps days
+ * contiguous (both of luxon's guesses of the offset land there).
  */
 export function workdayStart(workday: string, calendar: StudioCalendar): Date {
   const key = `${calendar.timeZone}|${calendar.workweekStart.hour}|${workday}`;
   let ms = workdayStarts.get(key);
   if (ms === undefined) {
     const at = new Date(calendarDayMs(workday));
-    ms = DateTime.fromObject(
-      { year: at.getUTCFullYear(), month: at.getUTCMonth() + 1, day: at.getUTCDate(), hour: calendar.workweekStart.hour },
-      { zone: calendar.timeZone },
-    ).toMillis();
+    ms =
+      earliestWallClockInstant(workday, calendar.workweekStart.hour * 60, calendar.timeZone) ??
+      DateTime.fromObject(
+        { year: at.getUTCFullYear(), month: at.getUTCMonth() + 1, day: at.getUTCDate(), hour: calendar.workweekStart.hour },
+        { zone: calendar.timeZone },
+      ).toMillis();
     if (workdayStarts.size >= 100_000) workdayStarts.clear();
     workdayStarts.set(key, ms);
   }
   return new Date(ms);
 }
-
 
 /** First workday of the workweek holding the given workday. */
 export function workweekStartOf(workday: string, calendar: StudioCalendar): string {

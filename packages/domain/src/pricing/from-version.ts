@@ -15,6 +15,8 @@ export type RateCardVersionFields = {
   afterHoursEndMinute: number;
   afterHoursPremiumBp: number;
   weekendPremiumBp: number;
+  lockoutDayRateCents?: number | null;
+  lockoutWeekendPremium?: boolean;
 };
 
 /** The pricing engine's view of a stored version, labelled the way quotes name it. */
@@ -30,6 +32,8 @@ export function rateCardFromVersion(roomName: string, version: RateCardVersionFi
     afterHours: { startMinute: version.afterHoursStartMinute, endMinute: version.afterHoursEndMinute },
     afterHoursPremiumBp: version.afterHoursPremiumBp,
     weekendPremiumBp: version.weekendPremiumBp,
+    lockoutDayRateCents: version.lockoutDayRateCents ?? null,
+    lockoutWeekendPremium: version.lockoutWeekendPremium ?? false,
     engineerRates,
   };
 }

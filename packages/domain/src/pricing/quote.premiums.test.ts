@@ -15,6 +15,14 @@ describe("after-hours and weekend premiums", () => {
     expect(result.lines[1]?.explanation).toBe("25% of the hourly rate ($95.00/h) on 2 h after hours (22:00–08:00): Mon 7 Dec 22:00–24:00.");
   });
 
+  it("rounds a half cent up, not to even: 30 min after hours at $93/h × 25% = 1162.5 ¢ is charged $11.63, where half-to-even would give $11.62 ([D] our documented half-up rule)", () => {
+    const card = { ...roomA, id: "room-93", hourlyRateCents: 9300, dayRateCents: 93_000 };
+    const result = quote(card, booking("2026-12-07T19:00", "2026-12-07T22:30"), wrenfield);
+    // 3.5 h × $93.00 = $325.50; 0.5 h × $93.00 × 25% = $11.625 → $11.63.
+    expect(summary(result)).toEqual([["room_hourly", 210, 32550], ["after_hours_premium", 30, 1163]]);
+    expect(result.totalCents).toBe(33713);
+  });
+
   it("charges a Saturday session 12:00–17:00 the weekend premium on all 5 h: $475.00 + $71.25 = $546.25 ([D] 5 × 15% × $95.00)", () => {
     const result = roomAOn("2026-12-12T12:00", "2026-12-12T17:00");
     expect(summary(result)).toEqual([["room_hourly", 300, 47500], ["weekend_premium", 300, 7125]]);

@@ -2,12 +2,13 @@ import { minorUnits } from "../shared/currency.ts";
 import { isValidTimeZone } from "../shared/time-zone.ts";
 import { billableTime } from "./billable-time.ts";
 import { engineerLines } from "./engineer-charges.ts";
+import { lockoutLines, lockoutSpan } from "./lockout.ts";
 import { premiumLines } from "./premium-charges.ts";
 import { PricingError, type PricingProblem } from "./pricing-problem.ts";
 import { roomLines } from "./room-charges.ts";
 import { studioDays } from "./studio-calendar.ts";
 import type { Booking, Quote, RateCard, Studio } from "./types.ts";
-import { validateBooking } from "./validate-booking.ts";
+import { maxBookingMinutes, validateBooking } from "./validate-booking.ts";
 import { validateRateCard } from "./validate-rate-card.ts";
 
 function studioProblems(studio: Studio): PricingProblem[] {
@@ -39,6 +40,7 @@ export function quote(rateCard: RateCard, booking: Booking, studio: Studio): Quo
   if (!bookingCheck.ok || problems.length > 0) throw new PricingError(problems);
 
   const { timeZone, currency } = studio;
+  if (booking.lockout) return lockoutQuote(rateCard, booking, studio);
   const time = billableTime(bookingCheck.value.elapsedMinutes, rateCard);
   const days = studioDays(booking.startsAt.getTime(), booking.endsAt.getTime(), rateCard.afterHours, timeZone);
   const pricing = { card: rateCard, currency, timeZone };
@@ -56,5 +58,28 @@ export function quote(rateCard: RateCard, booking: Booking, studio: Studio): Quo
     billableMinutes: time.billableMinutes,
     lines,
     totalCents: lines.reduce((sum, line) => sum + line.amountCents, 0),
+  };
+}
+
+/** A lockout: whole studio days, one day's price each (docs/pricing.md, "Lockouts"). */
+function lockoutQuote(rateCard: RateCard, booking: Booking, studio: Studio): Quote {
+  const { timeZone, currency } = studio;
+  const span = lockoutSpan(booking.startsAt, booking.endsAt, timeZone);
+  const elapsedMinutes = (span.endsAt.getTime() - span.startsAt.getTime()) / 60_000;
+  if (elapsedMinutes > maxBookingMinutes) {
+    throw new PricingError([{ code: "booking_too_long", field: "endsAt", message: `A lockout can last at most ${maxBookingMinutes / 1440} studio days.` }]);
+  }
+  const days = studioDays(span.startsAt.getTime(), span.endsAt.getTime(), rateCard.afterHours, timeZone);
+  const lines = lockoutLines(days, booking.engineers, { card: rateCard, currency, timeZone });
+  return {
+    rateCardId: rateCard.id,
+    rateCardLabel: rateCard.label,
+    currency,
+    timeZone,
+    elapsedMinutes,
+    billableMinutes: elapsedMinutes,
+    lines,
+    totalCents: lines.reduce((sum, line) => sum + line.amountCents, 0),
+    lockout: true,
   };
 }

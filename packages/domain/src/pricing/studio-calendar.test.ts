@@ -3,7 +3,7 @@ import { describe, expect, it } from "vitest";
 import { studioDays } from "./studio-calendar.ts";
 import { intlOffset, intlTally } from "./testing/intl-clock.ts";
 import { local } from "./testing/wrenfield.ts";
-import { offsetChanges } from "./wall-clock.ts";
+import { offsetChanges } from "../shared/wall-clock.ts";
 
 const chicago = "America/Chicago";
 const lateNight = { startMinute: 22 * 60, endMinute: 8 * 60 };

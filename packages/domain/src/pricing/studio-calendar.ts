@@ -1,6 +1,6 @@
 import type { DateTime } from "luxon";
 import type { LocalTimeWindow } from "./types.ts";
-import { isoDate, localAt, minuteOfDay, minuteMs, nextDayStart, offsetChanges, wallClockInstants } from "./wall-clock.ts";
+import { isoDate, localAt, minuteOfDay, minuteMs, nextDayStart, offsetChanges, offsetsDuring, wallClockInstants } from "../shared/wall-clock.ts";
 
 /** A stretch of booked time during which nothing that matters to the price changes. */
 export interface CalendarPiece {
@@ -31,7 +31,7 @@ export function isInWindow(minute: number, window: LocalTimeWindow): boolean {
 /** Every instant during one local day at which the price could change: midnight, the window's edges, offset changes. */
 function cutsForDay(dayStart: DateTime, dayEnd: DateTime, window: LocalTimeWindow, timeZone: string): number[] {
   const changes = offsetChanges(dayStart.toMillis(), dayEnd.toMillis(), timeZone);
-  const offsets = [dayStart.offset, ...changes.map((ms) => localAt(ms, timeZone).offset)];
+  const offsets = offsetsDuring(dayStart, dayEnd, timeZone, changes);
   const edges = [window.startMinute, window.endMinute].filter((minute) => minute > 0 && minute < 1440);
   return [dayStart.toMillis(), ...changes, ...edges.flatMap((minute) => wallClockInstants(dayStart, minute, offsets, timeZone))];
 }

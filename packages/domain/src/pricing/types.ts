@@ -41,6 +41,10 @@ export interface RateCard {
   /** Applies to minutes on a Saturday or Sunday in the studio's time zone. */
   weekendPremiumBp: number;
   engineerRates: EngineerRates;
+  /** What one lockout day costs; absent or null means the day rate (docs/pricing.md, lockouts). */
+  lockoutDayRateCents?: number | null;
+  /** Whether a lockout day on a Saturday or Sunday carries the weekend premium (on the day's price). */
+  lockoutWeekendPremium?: boolean;
 }
 
 export interface AssignedEngineer {
@@ -55,6 +59,11 @@ export interface Booking {
   startsAt: Date;
   endsAt: Date;
   engineers: readonly AssignedEngineer[];
+  /**
+   * The room is the client's around the clock for every studio day the booking touches, each
+   * day at the lockout day rate (docs/pricing.md). The span is widened to whole studio days.
+   */
+  lockout?: boolean;
 }
 
 export interface Studio {
@@ -102,4 +111,6 @@ export interface Quote {
   lines: QuoteLine[];
   /** Always the sum of the lines' amounts. */
   totalCents: number;
+  /** Present and true when the booking is a lockout of whole studio days. */
+  lockout?: boolean;
 }

@@ -17,6 +17,9 @@ function amountProblems(card: RateCard): PricingProblem[] {
   if (!isWholeAtLeast(card.dayRateCents, 1)) problems.push(problem("dayRateCents", "The day rate must be a whole number of cents above zero."));
   if (!isWholeAtLeast(card.afterHoursPremiumBp, 0)) problems.push(problem("afterHoursPremiumBp", "The after-hours premium must be whole basis points, zero or more."));
   if (!isWholeAtLeast(card.weekendPremiumBp, 0)) problems.push(problem("weekendPremiumBp", "The weekend premium must be whole basis points, zero or more."));
+  if (card.lockoutDayRateCents != null && !isWholeAtLeast(card.lockoutDayRateCents, 1)) {
+    problems.push(problem("lockoutDayRateCents", "The lockout day rate must be a whole number of cents above zero, or left empty to use the day rate."));
+  }
   const { engineer, assistant, perEngineerCents = {} } = card.engineerRates;
   if (!isWholeAtLeast(engineer, 0)) problems.push(problem("engineerRates.engineer", "The engineer rate must be whole cents, zero or more."));
   if (!isWholeAtLeast(assistant, 0)) problems.push(problem("engineerRates.assistant", "The assistant rate must be whole cents, zero or more."));

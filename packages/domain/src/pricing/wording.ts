@@ -1,7 +1,7 @@
 import { formatMoney } from "../shared/currency.ts";
 import type { CalendarPiece, StudioDay } from "./studio-calendar.ts";
 import type { LocalTimeWindow } from "./types.ts";
-import { localAt } from "./wall-clock.ts";
+import { localAt } from "../shared/wall-clock.ts";
 
 /** 150 → "2 h 30 min"; 45 → "45 min"; 180 → "3 h". */
 export function formatDuration(minutes: number): string {

@@ -38,6 +38,7 @@ export async function loadBookingDtos(db: DbOrTx, where: SQL | undefined, limit 
     startsAt: b.startsAt.toISOString(),
     endsAt: b.endsAt.toISOString(),
     status: b.status,
+    lockout: b.lockout,
     holdExpiresAt: iso(b.holdExpiresAt),
     queuedBehindId: b.queuedBehindId,
     engineers: engineers.filter((e) => e.bookingId === b.id).map((e) => ({ userId: e.userId, name: e.name, grade: e.grade ?? "engineer" })),

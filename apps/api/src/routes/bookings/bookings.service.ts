@@ -2,6 +2,7 @@ import { and, eq, gt, gte, inArray, lt, type SQL } from "drizzle-orm";
 import { bookingEngineers, bookings, clientAccounts, projects, rateCardVersions, type Db, type Tx } from "@takeup/db";
 import {
   bookingDateProblem,
+  lockoutSpan,
   maxBookingMinutes,
   type BookingDto,
   type BookingsQuery,
@@ -35,13 +36,21 @@ function inDateWindow(instants: { field: "startsAt" | "endsAt"; at: Date }[]) {
   if (problems.length > 0) throw new HttpError(400, "invalid_input", problems[0]!.message, problems);
 }
 
-/** The booking's times, checked for order and length; `changed` names the ones to hold to the date window. */
-function window(startsAt: string, endsAt: string, changed: ("startsAt" | "endsAt")[] = ["startsAt", "endsAt"]) {
-  const w = { startsAt: new Date(startsAt), endsAt: new Date(endsAt) };
-  inDateWindow(changed.map((field) => ({ field, at: w[field] })));
-  if (w.endsAt <= w.startsAt) {
+type WindowOptions = {
+  /** The times to hold to the date window: only moved ones, so an old booking's notes stay editable. */
+  changed?: ("startsAt" | "endsAt")[];
+  /** A lockout's span is widened to whole studio days in the studio's zone (docs/pricing.md). */
+  lockout?: { timeZone: string } | false;
+};
+
+/** The booked span, checked for order, date window and length. */
+function window(startsAt: string, endsAt: string, { changed = ["startsAt", "endsAt"], lockout = false }: WindowOptions = {}) {
+  const asked = { startsAt: new Date(startsAt), endsAt: new Date(endsAt) };
+  inDateWindow(changed.map((field) => ({ field, at: asked[field] })));
+  if (asked.endsAt <= asked.startsAt) {
     throw new HttpError(400, "invalid_input", "The end must be after the start", [{ field: "endsAt", rule: "after_start", message: "End after the start" }]);
   }
+  const w = lockout ? lockoutSpan(asked.startsAt, asked.endsAt, lockout.timeZone) : asked;
   if (w.endsAt.getTime() - w.startsAt.getTime() > maxBookingMinutes * minute) {
     throw new HttpError(400, "invalid_input", `A booking lasts at most ${maxBookingMinutes / 1440} days; book longer stays as several bookings`, [
       { field: "endsAt", rule: "max_length", message: `At most ${maxBookingMinutes / 1440} days` },
@@ -66,11 +75,11 @@ const conflictError = (conflicts: ConflictDto[], studio: StudioDto, actor: Actor
 /** POST /api/quotes: the price and what is in the way, storing nothing. */
 export async function previewQuote(db: Db, actor: Actor, input: QuoteInput): Promise<QuoteResultDto> {
   const studio = await loadStudio(db);
-  const w = window(input.startsAt, input.endsAt);
+  const w = window(input.startsAt, input.endsAt, { lockout: input.lockout ? studio : false });
   const resources = { roomId: input.roomId, engineerIds: unique(input.engineerIds), equipmentIds: unique(input.equipmentIds) };
   return bookingTx(db, async (tx) => {
     const room = await requireRoom(tx, resources);
-    const priced = await priceBooking(tx, { room, ...w, engineerIds: resources.engineerIds, studio });
+    const priced = await priceBooking(tx, { room, ...w, engineerIds: resources.engineerIds, studio, lockout: input.lockout ?? false });
     const conflicts = await findConflicts(tx, { ...resources, ...w, turnoverMinutes: room.turnoverMinutes, timeZone: studio.timeZone, now: new Date() });
     return {
       roomId: room.id,
@@ -90,7 +99,7 @@ export async function createBooking(
   input: CreateBookingCommand & { requestedByClient?: boolean },
 ): Promise<BookingDto> {
   const studio = await loadStudio(db);
-  const w = window(input.startsAt, input.endsAt);
+  const w = window(input.startsAt, input.endsAt, { lockout: input.lockout ? studio : false });
   const resources = { roomId: input.roomId, engineerIds: unique(input.engineerIds), equipmentIds: unique(input.equipmentIds) };
   const id = await bookingTx(db, async (tx) => {
     const room = await requireRoom(tx, resources);
@@ -101,7 +110,7 @@ export async function createBooking(
       if (!project) throw new HttpError(422, "unknown_project", "That project is not this client's", [{ field: "projectId", rule: "exists", message: "Choose one of the client's projects" }]);
     }
     const now = new Date();
-    const priced = await priceBooking(tx, { room, ...w, engineerIds: resources.engineerIds, studio });
+    const priced = await priceBooking(tx, { room, ...w, engineerIds: resources.engineerIds, studio, lockout: input.lockout ?? false });
     const conflicts = await findConflicts(tx, { ...resources, ...w, turnoverMinutes: room.turnoverMinutes, timeZone: studio.timeZone, now });
     let queuedBehindId: number | null = null;
     if (conflicts.length > 0) {
@@ -118,6 +127,7 @@ export async function createBooking(
         projectId: input.projectId ?? null,
         ...w,
         status: input.status,
+        lockout: input.lockout ?? false,
         holdExpiresAt: input.status === "hold" && !queuedBehindId ? new Date(now.getTime() + studio.holdHours * 3600_000) : null,
         queuedBehindId,
         rateCardVersionId: priced.version.id,
@@ -150,7 +160,10 @@ export async function updateBooking(db: Db, actor: Actor, id: number, input: Upd
     const links = await currentLinks(tx, id);
     // Only moved times must fit the window: editing the notes of an old booking stays possible.
     const moved = (["startsAt", "endsAt"] as const).filter((field) => input[field] !== undefined);
-    const w = window(input.startsAt ?? existing.startsAt.toISOString(), input.endsAt ?? existing.endsAt.toISOString(), moved);
+    const w = window(input.startsAt ?? existing.startsAt.toISOString(), input.endsAt ?? existing.endsAt.toISOString(), {
+      changed: [...moved],
+      lockout: existing.lockout ? studio : false,
+    });
     const resources = { roomId: existing.roomId, engineerIds: input.engineerIds ? unique(input.engineerIds) : links.engineerIds, equipmentIds: input.equipmentIds ? unique(input.equipmentIds) : links.equipmentIds };
     const room = await requireRoom(tx, resources);
     const before = await loadBookingDto(tx, id);
@@ -159,7 +172,7 @@ export async function updateBooking(db: Db, actor: Actor, id: number, input: Upd
       if (conflicts.length > 0) throw conflictError(conflicts, studio, actor);
     }
     const [version] = await tx.select().from(rateCardVersions).where(eq(rateCardVersions.id, existing.rateCardVersionId));
-    const priced = await priceBooking(tx, { room, ...w, engineerIds: resources.engineerIds, studio, version: version! });
+    const priced = await priceBooking(tx, { room, ...w, engineerIds: resources.engineerIds, studio, version: version!, lockout: existing.lockout });
     if (input.projectId) {
       const [project] = await tx.select().from(projects).where(and(eq(projects.id, input.projectId), eq(projects.clientAccountId, existing.clientAccountId)));
       if (!project) throw new HttpError(422, "unknown_project", "That project is not this client's", [{ field: "projectId", rule: "exists", message: "Choose one of the client's projects" }]);

@@ -128,6 +128,52 @@ describe("booking without double booking", () => {
   });
 });
 
+describe("lockouts", () => {
+  it("quotes Room A Mon 10:00 – Wed 20:00 as a lockout: three day-rate lines of $850.00, $2,550.00 (docs/pricing.md worked example)", async () => {
+    const response = await manager.post("/api/quotes").send({ roomId: ids.room("Room A"), startsAt: at(12, 1, "10:00"), endsAt: at(12, 3, "20:00"), lockout: true });
+    expect(response.status).toBe(200);
+    expect(response.body.quote.lockout).toBe(true);
+    expect(response.body.quote.lines.map((l: { kind: string; amountCents: number }) => [l.kind, l.amountCents])).toEqual([["room_day", 85000], ["room_day", 85000], ["room_day", 85000]]);
+    expect(response.body.quote.totalCents).toBe(255000);
+  });
+
+  it("holds whole studio days: a lockout booked Mon 10:00 – Wed 20:00 occupies Mon 00:00 to Thu 00:00, so a night session clashes", async () => {
+    const held = await book({ roomId: ids.room("Room A"), clientAccountId: ids.client("Lantern Static"), startsAt: at(13, 1, "10:00"), endsAt: at(13, 3, "20:00"), lockout: true });
+    expect(held.status, JSON.stringify(held.body)).toBe(201);
+    expect(held.body).toMatchObject({ lockout: true, status: "hold", quoteTotalCents: 255000 });
+    expect([held.body.startsAt, held.body.endsAt]).toEqual([new Date(at(13, 1, "00:00")).toISOString(), new Date(at(13, 4, "00:00")).toISOString()]);
+    const night = await book({ roomId: ids.room("Room A"), clientAccountId: ids.client("Copper Vale"), startsAt: at(13, 2, "02:00"), endsAt: at(13, 2, "05:00") });
+    expect(night.status).toBe(409);
+    expect(night.body.error.code).toBe("booking_conflict");
+    // Moving it keeps it a lockout, still whole days.
+    const moved = await manager.patch(`/api/bookings/${held.body.id}`).send({ endsAt: at(13, 4, "12:00") });
+    expect(moved.status, JSON.stringify(moved.body)).toBe(200);
+    expect([moved.body.lockout, moved.body.endsAt, moved.body.quoteTotalCents]).toEqual([true, new Date(at(13, 5, "00:00")).toISOString(), 340000]);
+  });
+
+  it("seeds the demo's Lantern Static lockout as one lockout booking: three day-rate lines of $850.00 plus a working day of engineer time each", async () => {
+    const [seeded] = await t.db.select().from(bookings).where(eq(bookings.title, "Tracking live (lockout, 3 days)"));
+    expect(seeded?.lockout).toBe(true);
+    expect(seeded?.quote.lines.filter((l) => l.kind === "room_day").map((l) => l.amountCents)).toEqual([85000, 85000, 85000]);
+    // [D] 3 × $850.00 + 3 × 10 h × ($40.00 + $25.00) = $4,500.00.
+    expect(seeded?.quoteTotalCents).toBe(450000);
+  });
+
+  it("prices lockouts at the card's own lockout day rate once the owner sets one, and refuses a zero rate naming the field", async () => {
+    const owner = await t.signIn(demo.owner);
+    const card = (await owner.get(`/api/rooms/${ids.room("Room C")}/rate-cards`)).body[0];
+    const { id: _id, roomId: _r, version: _v, effectiveFrom: _e, createdAt: _c, ...fields } = card;
+    const refused = await owner.post(`/api/rooms/${ids.room("Room C")}/rate-cards`).send({ ...fields, lockoutDayRateCents: 0 });
+    expect(refused.status).toBe(400);
+    expect(refused.body.error.details[0].field).toBe("lockoutDayRateCents");
+    const added = await owner.post(`/api/rooms/${ids.room("Room C")}/rate-cards`).send({ ...fields, note: "Lockout price", lockoutDayRateCents: 50000 });
+    expect(added.status, JSON.stringify(added.body)).toBe(201);
+    expect(added.body).toMatchObject({ lockoutDayRateCents: 50000, lockoutWeekendPremium: false });
+    const quoted = await manager.post("/api/quotes").send({ roomId: ids.room("Room C"), startsAt: at(14, 1, "10:00"), endsAt: at(14, 2, "20:00"), lockout: true });
+    expect(quoted.body.quote.totalCents).toBe(100000);
+  });
+});
+
 describe("rate-card versions", () => {
   it("keeps an existing booking's price when the owner changes the rate card; new quotes use the new version", async () => {
     const owner = await t.signIn(demo.owner);

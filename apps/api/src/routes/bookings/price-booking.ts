@@ -14,7 +14,7 @@ const halfUp = (amount: number, bp: number) => Math.floor((amount * bp + 5000) /
  */
 export async function priceBooking(
   db: DbOrTx,
-  input: { room: Room; startsAt: Date; endsAt: Date; engineerIds: string[]; studio: StudioDto; version?: RateCardVersion },
+  input: { room: Room; startsAt: Date; endsAt: Date; engineerIds: string[]; studio: StudioDto; version?: RateCardVersion; lockout?: boolean },
 ): Promise<PricedBooking> {
   const version = input.version ?? (await rateCardInForce(db, input.room.id, input.startsAt));
   if (!version) {
@@ -40,6 +40,7 @@ export async function priceBooking(
         startsAt: input.startsAt,
         endsAt: input.endsAt,
         engineers: engineers.map((e) => ({ id: e.userId, name: e.displayName, grade: e.engineerGrade ?? "engineer" })),
+        lockout: input.lockout ?? false,
       },
       { timeZone: input.studio.timeZone, currency: input.studio.currency },
     );

@@ -34,8 +34,9 @@ export type ComputedPeriod = {
 };
 
 /**
- * Runs the rules engine over every closed entry of the workweeks that close in the period
- * (a workweek straddling two periods is paid whole in the later one, see docs/payroll-rules.md).
+ * Runs the rules engine over every closed entry of the workweeks the period touches. A
+ * workweek straddling two periods pays its straight time in the period each hour was worked
+ * in and its overtime in the period holding its last day (29 CFR 778.106, docs/payroll-rules.md).
  */
 export async function computePeriod(db: DbOrTx, payroll: PayrollContext, row: PayPeriodRow): Promise<ComputedPeriod> {
   const period = payPeriodForWorkday(row.startDate, payroll.schedule, payroll.settings);

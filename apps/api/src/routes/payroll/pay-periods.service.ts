@@ -1,7 +1,7 @@
 import { desc, eq } from "drizzle-orm";
 import { alias } from "drizzle-orm/mysql-core";
 import { isDuplicateKeyError, payPeriods, timeEntryEdits, user, type Db, type PayPeriodRow } from "@takeup/db";
-import { payPeriodContaining, payrollCaution, type PayPeriodDto, type PayPeriodReviewDto } from "@takeup/domain";
+import { payPeriodContaining, payrollCaution, straddlingWeekNote, type PayPeriodDto, type PayPeriodReviewDto } from "@takeup/domain";
 import { conflict, HttpError, notFound } from "../../lib/http-error.ts";
 import { writeAudit } from "../../lib/audit.ts";
 import type { Actor } from "../../lib/actor.ts";
@@ -83,12 +83,20 @@ export async function reviewPayPeriod(db: Db, id: number): Promise<PayPeriodRevi
   const staff = computed.summary.staff.map((s) => {
     const weeks = computed.result.workweeks.filter((w) => w.staffId === s.staffId && s.workweekStarts.includes(w.workweekStart));
     const rateMap = new Map<string, { code: string; centsPerHour: number; minutes: number }>();
-    for (const line of weeks.flatMap((w) => w.rateLines)) {
-      const key = `${line.rateCode}@${line.centsPerHour}`;
-      const found = rateMap.get(key) ?? { code: line.rateCode, centsPerHour: line.centsPerHour, minutes: 0 };
-      found.minutes += line.minutes;
+    // The minutes paid in this period at each rate: a straddling week's other days are paid elsewhere.
+    const { startDate, endDate } = computed.period;
+    for (const a of weeks.flatMap((w) => w.allocations).filter((a) => a.workday >= startDate && a.workday <= endDate)) {
+      const key = `${a.rateCode}@${a.centsPerHour}`;
+      const found = rateMap.get(key) ?? { code: a.rateCode, centsPerHour: a.centsPerHour, minutes: 0 };
+      found.minutes += a.minutes;
       rateMap.set(key, found);
     }
+    const straddlingWeeks = s.workweeks.flatMap((w) => {
+      const note = straddlingWeekNote(w);
+      if (note === null) return [];
+      const { workweekStart, lastWorkday, begunEarlier, stillOpen, workedMinutes, overtimeMinutes, doubleTimeMinutes, weekOvertimeMinutes, weekDoubleTimeMinutes, overtimePremiumCents, doubleTimePremiumCents } = w;
+      return [{ workweekStart, lastWorkday, begunEarlier, stillOpen, workedMinutes, overtimeMinutes, doubleTimeMinutes, weekOvertimeMinutes, weekDoubleTimeMinutes, overtimePremiumCents, doubleTimePremiumCents, note }];
+    });
     return {
       staffUserId: s.staffId,
       name: computed.names.get(s.staffId) ?? s.staffId,
@@ -100,9 +108,11 @@ export async function reviewPayPeriod(db: Db, id: number): Promise<PayPeriodRevi
       overtimePremiumCents: s.overtimePremiumCents,
       doubleTimePremiumCents: s.doubleTimePremiumCents,
       grossCents: s.grossCents,
-      regularRates: weeks.flatMap((w) => (w.regularRate ? [{ workweekStart: w.workweekStart, centsPerHour: w.regularRate.centsPerHour, weightedAverage: w.regularRate.weightedAverage }] : [])),
+      // A week still open at the period's end has no regular rate yet: it is shown where the week ends.
+      regularRates: weeks.filter((w) => !s.workweeksStillOpen.includes(w.workweekStart)).flatMap((w) => (w.regularRate ? [{ workweekStart: w.workweekStart, centsPerHour: w.regularRate.centsPerHour, weightedAverage: w.regularRate.weightedAverage }] : [])),
       rates: [...rateMap.values()],
       entryCount: s.entryIds.length,
+      straddlingWeeks,
     };
   });
   const sum = (k: "workedMinutes" | "regularMinutes" | "overtimeMinutes" | "doubleTimeMinutes" | "grossCents") => staff.reduce((t, s) => t + s[k], 0);

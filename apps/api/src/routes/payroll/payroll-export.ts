@@ -1,7 +1,7 @@
 // The payroll export: column layout documented in docs/payroll-export.md and kept stable.
 import type { Response } from "express";
 import ExcelJS from "exceljs";
-import { localDateTime, payrollCaution, type EntryTrace } from "@takeup/domain";
+import { localDateTime, payrollCaution, straddlingWeekNote, type EntryTrace } from "@takeup/domain";
 import type { ComputedPeriod } from "./compute-period.ts";
 import { addSafeRow, toCsv } from "../../lib/spreadsheet.ts";
 
@@ -41,6 +41,7 @@ export const summaryColumns = [
   { header: "Overtime premium", key: "overtimePremium", width: 17, numFmt: "#,##0.00" },
   { header: "Double-time premium", key: "doubleTimePremium", width: 19, numFmt: "#,##0.00" },
   { header: "Gross pay", key: "gross", width: 12, numFmt: "#,##0.00" },
+  { header: "Weeks across the period's edge", key: "straddling", width: 60 },
 ] as const;
 
 export function summaryRows(c: ComputedPeriod) {
@@ -62,6 +63,7 @@ export function summaryRows(c: ComputedPeriod) {
       overtimePremium: dollars(s.overtimePremiumCents),
       doubleTimePremium: dollars(s.doubleTimePremiumCents),
       gross: dollars(s.grossCents),
+      straddling: s.workweeks.flatMap((w) => straddlingWeekNote(w) ?? []).join(" "),
     };
   });
 }
@@ -125,7 +127,8 @@ export async function writeWorkbook(c: ComputedPeriod, res: Response, timeZone: 
   const dailyStyled = sharedStyles(daily);
   for (const s of c.summary.staff) {
     for (const w of c.result.workweeks.filter((w) => w.staffId === s.staffId && s.workweekStarts.includes(w.workweekStart))) {
-      for (const d of w.days) {
+      // Only the period's own days: a straddling week's other days are paid in the other period.
+      for (const d of w.days.filter((d) => d.workday >= c.period.startDate && d.workday <= c.period.endDate)) {
         dailyStyled(addSafeRow(daily, { staffId: s.staffId, name: c.names.get(s.staffId) ?? "", workweekStart: w.workweekStart, date: d.workday, worked: hours(d.workedMinutes), regular: hours(d.regularMinutes), overtime: hours(d.overtimeMinutes), doubleTime: hours(d.doubleTimeMinutes) })).commit();
       }
     }

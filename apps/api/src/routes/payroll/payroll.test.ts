@@ -147,10 +147,11 @@ describe("locking and exports", () => {
     const response = await books.get(`/api/pay-periods/${periodId}/export?format=csv`);
     expect(response.headers["content-type"]).toMatch(/^text\/csv/);
     const [header, ...lines] = response.text.trim().split("\r\n");
-    expect(header).toBe("Staff ID,Name,Period start,Period end,Regular hours,Overtime hours,Double-time hours,Total hours,Pay rates,Straight-time pay,Overtime premium,Double-time premium,Gross pay");
+    expect(header).toBe("Staff ID,Name,Period start,Period end,Regular hours,Overtime hours,Double-time hours,Total hours,Pay rates,Straight-time pay,Overtime premium,Double-time premium,Gross pay,Weeks across the period's edge");
     const jo = lines.find((l) => l.includes("Jo Kettering"))!.split(",");
     expect(jo.slice(4, 8)).toEqual(["40.00", "6.00", "0.00", "46.00"]);
-    expect(jo.at(-1)).toBe("588.00");
+    // Gross pay, then the note on weeks across the period's edge (none here).
+    expect(jo.slice(-2)).toEqual(["588.00", ""]);
   });
 
   it("refuses an unknown export format, naming the field", async () => {

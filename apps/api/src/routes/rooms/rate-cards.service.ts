@@ -65,6 +65,8 @@ export async function insertRateCardVersion(tx: DbOrTx, roomId: number, input: C
     afterHoursEndMinute: input.afterHoursEndMinute,
     afterHoursPremiumBp: input.afterHoursPremiumBp,
     weekendPremiumBp: input.weekendPremiumBp,
+    lockoutDayRateCents: input.lockoutDayRateCents ?? null,
+    lockoutWeekendPremium: input.lockoutWeekendPremium ?? false,
     note: input.note?.trim() || null,
     createdByUserId,
   };

@@ -29,6 +29,7 @@ export const staffRow = (over: Partial<PayPeriodStaffDto> = {}): PayPeriodStaffD
   regularRates: [{ workweekStart: "2026-11-30", centsPerHour: 2800, weightedAverage: false }],
   rates: [{ code: "engineer", centsPerHour: 2800, minutes: 2490 }],
   entryCount: 6,
+  straddlingWeeks: [],
   ...over,
 });
 

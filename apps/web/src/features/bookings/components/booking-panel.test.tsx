@@ -36,6 +36,13 @@ describe("BookingPanel", () => {
     expect(panel.queryByRole("button", { name: "Cancel booking" })).not.toBeInTheDocument();
   });
 
+  it("says a lockout holds whole days around the clock", async () => {
+    mockApi([{ method: "GET", path: "/api/bookings/12", reply: { body: booking({ lockout: true, startsAt: "2026-12-07T06:00:00.000Z", endsAt: "2026-12-10T06:00:00.000Z" }) } }]);
+    renderPanel();
+    const panel = within(screen.getByRole("dialog", { name: "Booking #12" }));
+    expect(await panel.findByText("Lockout: whole days around the clock, each at the day rate")).toBeInTheDocument();
+  });
+
   it("confirms a hold with the deposit marked received", async () => {
     const { calls } = mockApi([
       { method: "GET", path: "/api/bookings/12", reply: { body: booking({ status: "hold", holdExpiresAt: "2026-12-10T20:00:00.000Z", allowedActions: ["confirm", "release"] }) } },

@@ -71,6 +71,7 @@ function BookingView({ booking, timeZone, canEdit, engineers, equipment, onOpenB
         <Term label="When">
           {formatTimeRange(booking.startsAt, booking.endsAt, timeZone, { withDay: true })}
           <span className="text-muted"> · studio time</span>
+          {booking.lockout ? <span className="block text-muted">Lockout: whole days around the clock, each at the day rate</span> : null}
         </Term>
         {booking.status === "hold" && booking.holdExpiresAt ? (
           <Term label="Hold">Hold lapses {formatStudioDayTime(booking.holdExpiresAt, timeZone)}</Term>

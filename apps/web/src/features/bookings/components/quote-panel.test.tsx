@@ -146,6 +146,29 @@ describe("QuotePanel", () => {
     });
   });
 
+  it("quotes and holds a lockout as whole studio days, midnight to midnight, with lockout set", async () => {
+    const { calls } = mockApi([
+      { method: "POST", path: "/api/quotes", reply: { body: quoteResult() } },
+      { method: "POST", path: "/api/bookings", reply: { status: 201, body: booking({ lockout: true, status: "hold" }) } },
+      projects,
+    ]);
+    const { panel, user, onClose } = renderPanel();
+    await panel.findByText("Total $285.00");
+
+    await user.click(panel.getByRole("checkbox", { name: /^Lockout/ }));
+    expect(panel.queryByLabelText("Start")).toBeNull();
+    await user.clear(panel.getByLabelText("Last day"));
+    await user.type(panel.getByLabelText("Last day"), "2026-12-09");
+    const lockout = { startsAt: "2026-12-07T00:00:00-06:00", endsAt: "2026-12-10T00:00:00-06:00", lockout: true };
+    await vi.waitFor(() => expect(calls.at(-1)?.body).toMatchObject({ roomId: 1, ...lockout }));
+
+    await user.selectOptions(panel.getByLabelText("Client"), "Copper Vale");
+    await vi.waitFor(() => expect(panel.getByRole("button", { name: "Pencil a hold" })).toBeEnabled());
+    await user.click(panel.getByRole("button", { name: "Pencil a hold" }));
+    await vi.waitFor(() => expect(onClose).toHaveBeenCalled());
+    expect(calls.find((c) => c.path === "/api/bookings")?.body).toMatchObject({ ...lockout, status: "hold" });
+  });
+
   it("asks for the client before booking", async () => {
     const { calls } = mockApi([{ method: "POST", path: "/api/quotes", reply: { body: quoteResult() } }]);
     const { panel, user } = renderPanel();

@@ -15,7 +15,7 @@ import { Textarea } from "../../../components/ui/textarea.tsx";
 import { useToast } from "../../../components/ui/use-toast.ts";
 import { ApiError, errorMessage } from "../../../lib/api-client.ts";
 import { applyApiErrors } from "../../../lib/form-errors.ts";
-import { formatDayShort, sessionInstants } from "../../../lib/studio-time.ts";
+import { addDays, formatDayShort, sessionInstants, studioDayStartIso } from "../../../lib/studio-time.ts";
 import { useDebouncedValue } from "../../../lib/use-debounced-value.ts";
 import { quoteKeys } from "../api/booking-keys.ts";
 import { useCreateBooking } from "../api/create-booking.ts";
@@ -40,10 +40,22 @@ const bookingForm = z.object({
   equipmentIds: z.array(z.string()),
   title: z.string().trim().max(120, "Use at most 120 characters"),
   notes: z.string().trim().max(2000, "Use at most 2000 characters"),
-});
+  lockout: z.boolean(),
+  lastDay: z.string(),
+}).refine((v) => !v.lockout || (/^\d{4}-\d{2}-\d{2}$/.test(v.lastDay) && v.lastDay >= v.date), { path: ["lastDay"], message: "Choose a last day on or after the first" });
 type BookingFormValues = z.infer<typeof bookingForm>;
 
-const fields = ["roomId", "clientAccountId", "projectId", "date", "start", "end", "engineerIds", "equipmentIds", "title", "notes"] as const;
+const fields = ["roomId", "clientAccountId", "projectId", "date", "start", "end", "engineerIds", "equipmentIds", "title", "notes", "lastDay"] as const;
+
+/**
+ * The instants to quote and book: a session's start and end, or for a lockout the whole studio
+ * days from the first day's midnight to the midnight after the last (the API widens to these too).
+ */
+function bookingInstants(values: Pick<BookingFormValues, "date" | "start" | "end" | "lockout" | "lastDay">, timeZone: string) {
+  if (!values.lockout) return sessionInstants(values.date, values.start, values.end, timeZone);
+  if (!/^\d{4}-\d{2}-\d{2}$/.test(values.date) || !/^\d{4}-\d{2}-\d{2}$/.test(values.lastDay) || values.lastDay < values.date) return null;
+  return { startsAt: studioDayStartIso(values.date, timeZone), endsAt: studioDayStartIso(addDays(values.lastDay, 1), timeZone), overnight: false };
+}
 const apiFieldToForm: Record<string, string> = { startsAt: "start", endsAt: "end" };
 
 type QuotePanelProps = {
@@ -90,14 +102,16 @@ function QuoteForm({ initial, rooms, clients, engineers, equipment, timeZone, on
       equipmentIds: [],
       title: "",
       notes: "",
+      lockout: false,
+      lastDay: initial.date,
     },
   });
-  const [roomId, clientAccountId, date, start, end, engineerIds, equipmentIds] = useWatch({
+  const [roomId, clientAccountId, date, start, end, engineerIds, equipmentIds, lockout, lastDay] = useWatch({
     control,
-    name: ["roomId", "clientAccountId", "date", "start", "end", "engineerIds", "equipmentIds"],
+    name: ["roomId", "clientAccountId", "date", "start", "end", "engineerIds", "equipmentIds", "lockout", "lastDay"],
   });
 
-  const times = sessionInstants(date, start, end, timeZone);
+  const times = bookingInstants({ date, start, end, lockout, lastDay }, timeZone);
   const current: QuoteInput | null =
     times && roomId
       ? {
@@ -106,6 +120,7 @@ function QuoteForm({ initial, rooms, clients, engineers, equipment, timeZone, on
           endsAt: times.endsAt,
           engineerIds,
           equipmentIds: equipmentIds.map(Number),
+          ...(lockout ? { lockout: true } : {}),
         }
       : null;
   const debounced = useDebouncedValue(current, quoteDelayMs);
@@ -119,7 +134,7 @@ function QuoteForm({ initial, rooms, clients, engineers, equipment, timeZone, on
   const book = (mode: Mode) =>
     handleSubmit(async (values) => {
       setFormError(null);
-      const instants = sessionInstants(values.date, values.start, values.end, timeZone);
+      const instants = bookingInstants(values, timeZone);
       if (!instants) return;
       try {
         const booking = await create.mutateAsync({
@@ -133,6 +148,7 @@ function QuoteForm({ initial, rooms, clients, engineers, equipment, timeZone, on
           ...(values.title ? { title: values.title } : {}),
           ...(values.notes ? { notes: values.notes } : {}),
           status: mode.status,
+          ...(values.lockout ? { lockout: true } : {}),
           ...(mode.queueBehindHold ? { queueBehindHold: true } : {}),
         });
         toast(
@@ -201,6 +217,23 @@ function QuoteForm({ initial, rooms, clients, engineers, equipment, timeZone, on
           setValue={setValue}
           error={errors.projectId?.message}
         />
+        <label className="flex items-start gap-2 text-sm">
+          <input type="checkbox" className="mt-0.5 size-4 accent-rust" {...register("lockout")} />
+          <span>
+            <span className="font-medium">Lockout</span>
+            <span className="block text-xs text-muted">The room is held around the clock for whole days, each at the day rate: no hourly time and no after-hours premium.</span>
+          </span>
+        </label>
+        {lockout ? (
+          <div className="grid gap-4 sm:grid-cols-2">
+            <FormField label="First day" error={errors.date?.message}>
+              {(field) => <Input {...field} {...register("date")} type="date" />}
+            </FormField>
+            <FormField label="Last day" error={errors.lastDay?.message}>
+              {(field) => <Input {...field} {...register("lastDay")} type="date" />}
+            </FormField>
+          </div>
+        ) : (
         <div className="grid gap-4 sm:grid-cols-3">
           <FormField label="Date" error={errors.date?.message}>
             {(field) => <Input {...field} {...register("date")} type="date" />}
@@ -216,7 +249,8 @@ function QuoteForm({ initial, rooms, clients, engineers, equipment, timeZone, on
             {(field) => <Input {...field} {...register("end")} type="time" step={900} />}
           </FormField>
         </div>
-        <p className="-mt-2 text-xs text-muted">Studio time ({timeZone}).</p>
+        )}
+        <p className="-mt-2 text-xs text-muted">{lockout ? `Whole days, midnight to midnight, studio time (${timeZone}).` : `Studio time (${timeZone}).`}</p>
         <div className="grid gap-4 sm:grid-cols-2">
           <CheckList
             legend="Engineers"

@@ -2,7 +2,7 @@ import { screen, within } from "@testing-library/react";
 import { describe, expect, it } from "vitest";
 import { mockApi } from "../../../test/mock-api.ts";
 import { renderWithApp } from "../../../test/render.tsx";
-import { period, review } from "../test-fixtures.ts";
+import { period, review, staffRow } from "../test-fixtures.ts";
 import { PayPeriodReview } from "./pay-period-review.tsx";
 
 const cells = (row: HTMLElement) => within(row).getAllByRole("cell").map((c) => c.textContent);
@@ -21,6 +21,24 @@ describe("PayPeriodReview", () => {
     expect(within(total!).getByRole("rowheader")).toHaveTextContent("Total");
     // 40 + 40, 1.5 + 4.75, 0 + 1, 41.5 + 45.75; $697.20 + $1,017.75, $21.00 + $52.50, $0 + $22.25, $718.20 + $1,092.50.
     expect(cells(total!)).toEqual(["80.00 h", "6.25 h", "1.00 h", "87.25 h", "No total", "$1,714.95", "$73.50", "$22.25", "$1,810.70"]);
+  });
+
+  it("says which overtime belongs to a week still open at the period's end (29 CFR 778.106)", () => {
+    mockApi([]);
+    const note =
+      "The week of 2026-01-12 is still open at the period's end (its last day is 2026-01-18): the straight time worked so far is paid in this period; its overtime, if any, is paid in the period holding 2026-01-18 (29 CFR 778.106).";
+    const open = { workweekStart: "2026-01-12", lastWorkday: "2026-01-18", begunEarlier: false, stillOpen: true, workedMinutes: 1920, overtimeMinutes: 0, doubleTimeMinutes: 0, weekOvertimeMinutes: 0, weekDoubleTimeMinutes: 0, overtimePremiumCents: 0, doubleTimePremiumCents: 0, note };
+    renderWithApp(<PayPeriodReview review={review({ staff: [staffRow({ straddlingWeeks: [open] })] })} role="bookkeeper" currency="USD" />);
+
+    const weeks = within(screen.getByRole("region", { name: "Weeks across the period's edge" }));
+    expect(weeks.getByText("Priya Oduya · still open at the period's end")).toBeInTheDocument();
+    expect(weeks.getByText(note)).toBeInTheDocument();
+  });
+
+  it("shows no list of straddling weeks when every week lies inside the period", () => {
+    mockApi([]);
+    renderWithApp(<PayPeriodReview review={review()} role="bookkeeper" currency="USD" />);
+    expect(screen.queryByRole("region", { name: "Weeks across the period's edge" })).toBeNull();
   });
 
   it("names the rules in plain words and lists each flag's message in studio time", () => {

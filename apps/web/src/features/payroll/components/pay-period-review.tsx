@@ -46,6 +46,7 @@ export function PayPeriodReview({ review, role, currency }: PayPeriodReviewProps
       </section>
       <Flags flags={review.flags} timeZone={timeZone} />
       <StaffTable periodId={review.period.id} staff={review.staff} currency={currency} />
+      <StraddlingWeeks staff={review.staff} />
     </div>
   );
 }
@@ -244,6 +245,33 @@ function StaffTable({ periodId, staff, currency }: { periodId: number; staff: Pa
         </table>
       </div>
     </section>
+  );
+}
+
+/**
+ * Workweeks crossing the period's edge: straight time is paid in the period each hour was
+ * worked in, overtime in the period holding the week's last day (29 CFR 778.106).
+ */
+function StraddlingWeeks({ staff }: { staff: PayPeriodStaffDto[] }) {
+  const rows = staff.flatMap((person) => person.straddlingWeeks.map((week) => ({ name: person.name, week })));
+  if (rows.length === 0) return null;
+  return (
+    <Card title="Weeks across the period's edge">
+      <p className="text-sm text-muted">
+        Straight time is paid in the period each hour was worked in; a week&apos;s overtime is only known when the week ends, so it is paid in the period holding the
+        week&apos;s last day.
+      </p>
+      <ul className="mt-2 flex flex-col gap-2 text-sm">
+        {rows.map(({ name, week }) => (
+          <li key={`${name}-${week.workweekStart}`} className="flex flex-col gap-0.5 sm:flex-row sm:items-baseline sm:gap-3">
+            <span className="shrink-0 font-semibold">
+              {name} · {week.stillOpen ? "still open at the period's end" : "begun in the previous period"}
+            </span>
+            <span className="break-words">{week.note}</span>
+          </li>
+        ))}
+      </ul>
+    </Card>
   );
 }
 

@@ -32,6 +32,8 @@ describe("RateCardFormDialog", () => {
     await fill("After-hours to", "07:30");
     await fill("After-hours premium (%)", "25");
     await fill("Weekend premium (%)", "12.5");
+    await user.type(form.getByLabelText(/^Lockout day rate/), "700");
+    await user.click(form.getByRole("checkbox", { name: "Add the weekend premium to lockout days on Saturday and Sunday" }));
     await fill("Effective from", "2027-01-04T09:00");
     await user.type(form.getByLabelText("Note"), "New year prices");
     expect(form.getByText(/Existing bookings keep the prices they were quoted on/)).toBeInTheDocument();
@@ -48,6 +50,8 @@ describe("RateCardFormDialog", () => {
       afterHoursEndMinute: 450,
       afterHoursPremiumBp: 2500,
       weekendPremiumBp: 1250,
+      lockoutDayRateCents: 70000,
+      lockoutWeekendPremium: true,
       // 09:00 on a January Monday in Chicago (UTC−6).
       effectiveFrom: "2027-01-04T09:00:00-06:00",
       note: "New year prices",

@@ -28,6 +28,8 @@ const rateCardForm = z.object({
   afterHoursTo: time,
   afterHoursPremiumPercent: percent,
   weekendPremiumPercent: percent,
+  lockoutDayRate: z.string().trim().regex(/^(\d+(\.\d+)?)?$/, "Enter an amount such as 800, or leave it empty for the day rate"),
+  lockoutWeekendPremium: z.boolean(),
   effectiveFrom: z.string(),
   note: z.string().trim().max(200, "Use at most 200 characters"),
 });
@@ -44,6 +46,8 @@ const apiFieldToForm: Record<string, keyof RateCardFormValues> = {
   afterHoursEndMinute: "afterHoursTo",
   afterHoursPremiumBp: "afterHoursPremiumPercent",
   weekendPremiumBp: "weekendPremiumPercent",
+  lockoutDayRateCents: "lockoutDayRate",
+  lockoutWeekendPremium: "lockoutWeekendPremium",
   effectiveFrom: "effectiveFrom",
   note: "note",
 };
@@ -67,6 +71,8 @@ function startingValues(current: RateCardVersionDto | null, currency: string, ef
     afterHoursTo: minuteToTime(current?.afterHoursEndMinute ?? 8 * 60),
     afterHoursPremiumPercent: current ? bpToPercent(current.afterHoursPremiumBp) : 0,
     weekendPremiumPercent: current ? bpToPercent(current.weekendPremiumBp) : 0,
+    lockoutDayRate: current?.lockoutDayRateCents != null ? fromMinorUnits(current.lockoutDayRateCents, currency) : "",
+    lockoutWeekendPremium: current?.lockoutWeekendPremium ?? false,
     effectiveFrom,
     note: "",
   };
@@ -88,6 +94,8 @@ export function toRateCardInput(values: RateCardFormValues, { currency, timeZone
     afterHoursEndMinute: timeToMinute(values.afterHoursTo) ?? 0,
     afterHoursPremiumBp: percentToBp(values.afterHoursPremiumPercent),
     weekendPremiumBp: percentToBp(values.weekendPremiumPercent),
+    lockoutDayRateCents: values.lockoutDayRate ? (toMinorUnits(values.lockoutDayRate, currency) ?? null) : null,
+    lockoutWeekendPremium: values.lockoutWeekendPremium,
     ...(effectiveFrom ? { effectiveFrom } : {}),
     ...(values.note ? { note: values.note } : {}),
   };
@@ -168,6 +176,16 @@ function RateCardForm({ room, timeZone, currency, onDone }: { room: RoomDto; tim
         <FormField label="Weekend premium (%)" hint="Added to room time on Saturday and Sunday." error={errors.weekendPremiumPercent?.message}>
           {(field) => <Input {...field} {...register("weekendPremiumPercent", { valueAsNumber: true })} {...number} max={200} />}
         </FormField>
+      </fieldset>
+      <fieldset className="grid gap-4 sm:grid-cols-2">
+        <legend className="mb-2 text-sm font-semibold">Lockouts</legend>
+        <FormField label="Lockout day rate" optional hint={`${currency} for each whole day a client locks the room out; empty means the day rate.`} error={errors.lockoutDayRate?.message}>
+          {(field) => <Input {...field} {...register("lockoutDayRate")} inputMode="decimal" autoComplete="off" />}
+        </FormField>
+        <label className="flex items-start gap-2 self-end text-sm">
+          <input type="checkbox" {...register("lockoutWeekendPremium")} className="mt-0.5 size-4 accent-rust" />
+          <span>Add the weekend premium to lockout days on Saturday and Sunday</span>
+        </label>
       </fieldset>
       <div className="grid gap-4 sm:grid-cols-2">
         <FormField label="Effective from" hint="Studio time. Leave it as it is to start the new prices now." error={errors.effectiveFrom?.message}>

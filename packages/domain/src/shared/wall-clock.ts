@@ -59,3 +59,24 @@ export function wallClockInstants(dayStart: DateTime, minute: number, offsetsMin
   }
   return [...found];
 }
+
+/** The UTC offsets (minutes) in force at any moment of one studio day, and just before it. */
+export function offsetsDuring(dayStart: DateTime, dayEnd: DateTime, timeZone: string, changes = offsetChanges(dayStart.toMillis(), dayEnd.toMillis(), timeZone)): number[] {
+  // The hour before midnight counts too: where a change lands on midnight, luxon may have read
+  // midnight with the later offset, and the earlier reading of the day's first hour needs the other.
+  const before = localAt(dayStart.toMillis() - 3_600_000, timeZone).offset;
+  return [...new Set([before, dayStart.offset, ...changes.map((ms) => localAt(ms, timeZone).offset)])];
+}
+
+/**
+ * The first instant of a local date (`YYYY-MM-DD`) whose wall clock reads `minute`: in a
+ * fall-back hour, which reads twice, the earlier of the two. Null when the wall time is
+ * skipped (a spring-forward gap). Unlike luxon's `fromObject`, the answer never depends on
+ * the date the program runs: luxon guesses the offset of a repeated hour from today's.
+ */
+export function earliestWallClockInstant(date: string, minute: number, timeZone: string): number | null {
+  const dayStart = DateTime.fromISO(date, { zone: timeZone }).startOf("day");
+  if (!dayStart.isValid) throw new RangeError(`Cannot read ${date} in time zone ${timeZone}`);
+  const instants = wallClockInstants(dayStart, minute, offsetsDuring(dayStart, nextDayStart(dayStart), timeZone), timeZone);
+  return instants.length === 0 ? null : Math.min(...instants);
+}
