@@ -72,7 +72,7 @@ export class SignInThrottle {
   }
 
   async recordSignInFailure(address: string, email: string): Promise<void> {
-    for (const key of this.signInKeys(address, email)) await this.hit(key);
+    await Promise.all(this.signInKeys(address, email).map((key) => this.hit(key, false)));
   }
 
   /** The right password clears this address's count on the account and the account's own count. */
@@ -86,7 +86,7 @@ export class SignInThrottle {
     const key = { key: keyOf("reset:address", address), rule: this.policy.resetRequestsPerAddress };
     const blocked = await this.blockedFor([key]);
     if (blocked !== undefined) throw tooMany("Too many password-reset requests.", blocked);
-    await this.hit(key);
+    await this.hit(key, false);
   }
 
   /** Whether another reset e-mail may go to this address now (counted whether or not the account exists). */
@@ -124,9 +124,9 @@ export class SignInThrottle {
    * One atomic upsert: a hit after the window has passed starts a new window; the hit that reaches
    * the limit sets the block. MariaDB evaluates ON DUPLICATE KEY UPDATE assignments left to right
    * with the values already assigned, so blocked_until is computed first, from the old hits and
-   * window, then hits, then the window. Returns the hits counted in the current window.
+   * window, then hits, then the window. Returns the hits counted in the current window when asked.
    */
-  private async hit({ key, rule }: Key): Promise<number> {
+  private async hit({ key, rule }: Key, count = true): Promise<number> {
     const now = new Date(this.now());
     const windowOpenedAfter = new Date(now.getTime() - rule.windowMs);
     const blockUntil = rule.blockMs > 0 ? new Date(now.getTime() + rule.blockMs) : null;
@@ -140,6 +140,7 @@ export class SignInThrottle {
                            IF(hits + 1 >= ${rule.limit} AND ${blockUntil} IS NOT NULL, ${blockUntil}, blocked_until)),
         hits = IF(window_started_at <= ${windowOpenedAfter}, 1, hits + 1),
         window_started_at = IF(window_started_at <= ${windowOpenedAfter}, ${now}, window_started_at)`);
+    if (!count) return 0;
     const [row] = await this.db
       .select({ hits: throttleCounters.hits })
       .from(throttleCounters)

@@ -30,6 +30,7 @@ import { ApprovalsPage } from "./routes/time/approvals.tsx";
 import { ClockPage } from "./routes/time/clock.tsx";
 import { MyTimesheetPage } from "./routes/time/my-timesheet.tsx";
 import { SettingsRoute } from "./routes/settings/settings.tsx";
+import { ProfileRoute } from "./routes/auth/profile.tsx";
 import { TeamRoute } from "./routes/team/team.tsx";
 
 /** A screen only the given roles may open; everyone else gets "Not allowed here". */
@@ -67,6 +68,7 @@ export const routes: RouteObject[] = [
           guarded(paths.payrollSettings.path, areaRoles.payrollSettings, <PayrollSettingsPage />),
           guarded(paths.team.path, areaRoles.team, <TeamRoute />),
           guarded(paths.settings.path, areaRoles.settings, <SettingsRoute />),
+          guarded(paths.profile.path, areaRoles.profile, <ProfileRoute />),
           guarded(paths.activity.path, areaRoles.activity, <ActivityRoute />),
           guarded(paths.devMail.path, areaRoles.devMail, <DevMailRoute />),
           { path: "*", element: <NotFoundRoute /> },

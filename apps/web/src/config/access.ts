@@ -11,6 +11,7 @@ export const areaRoles = {
   sessions: ["client"],
   team: ["owner"],
   settings: ["owner"],
+  profile: ["owner", "manager", "engineer", "bookkeeper", "client"],
   activity: ["owner"],
   devMail: ["owner"],
   // Engineers have the clock on their home page; owner and manager clock in at /clock.

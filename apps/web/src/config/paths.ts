@@ -34,6 +34,7 @@ export const paths = {
   sessions: { path: "/sessions", getHref: () => "/sessions" },
   team: { path: "/team", getHref: () => "/team" },
   settings: { path: "/settings", getHref: () => "/settings" },
+  profile: { path: "/profile", getHref: () => "/profile" },
   activity: { path: "/activity", getHref: () => "/activity" },
   devMail: { path: "/dev/mail", getHref: () => "/dev/mail" },
   clock: { path: "/clock", getHref: () => "/clock" },

@@ -1,5 +1,7 @@
 import { useEffect, useId, useState, type ReactNode } from "react";
 import type { NavItem } from "../../config/navigation.ts";
+import { Link } from "react-router";
+import { paths } from "../../config/paths.ts";
 import { Button } from "../ui/button.tsx";
 import { BrandMark } from "./brand-mark.tsx";
 import { SideNav } from "./side-nav.tsx";
@@ -30,6 +32,9 @@ export function AppShell({ studioName, person, items, onSignOut, signingOut, chi
     <div className="border-t border-line pt-3">
       <p className="truncate font-semibold">{person.name}</p>
       <p className="text-sm text-muted">{person.roleLabel}</p>
+      <Link to={paths.profile.getHref()} className="text-sm underline underline-offset-2">
+        Your profile
+      </Link>
       <Button variant="secondary" size="sm" className="mt-2 w-full" onClick={onSignOut} pending={signingOut}>
         Sign out
       </Button>
