@@ -234,21 +234,21 @@ function QuoteForm({ initial, rooms, clients, engineers, equipment, timeZone, on
             </FormField>
           </div>
         ) : (
-        <div className="grid gap-4 sm:grid-cols-3">
-          <FormField label="Date" error={errors.date?.message}>
-            {(field) => <Input {...field} {...register("date")} type="date" />}
-          </FormField>
-          <FormField label="Start" error={errors.start?.message}>
-            {(field) => <Input {...field} {...register("start")} type="time" step={900} />}
-          </FormField>
-          <FormField
-            label="End"
-            hint={times?.overnight ? `Ends ${formatDayShort(times.endsAt.slice(0, 10))}, past midnight.` : undefined}
-            error={errors.end?.message}
-          >
-            {(field) => <Input {...field} {...register("end")} type="time" step={900} />}
-          </FormField>
-        </div>
+          <div className="grid gap-4 sm:grid-cols-3">
+            <FormField label="Date" error={errors.date?.message}>
+              {(field) => <Input {...field} {...register("date")} type="date" />}
+            </FormField>
+            <FormField label="Start" error={errors.start?.message}>
+              {(field) => <Input {...field} {...register("start")} type="time" step={900} />}
+            </FormField>
+            <FormField
+              label="End"
+              hint={times?.overnight ? `Ends ${formatDayShort(times.endsAt.slice(0, 10))}, past midnight.` : undefined}
+              error={errors.end?.message}
+            >
+              {(field) => <Input {...field} {...register("end")} type="time" step={900} />}
+            </FormField>
+          </div>
         )}
         <p className="-mt-2 text-xs text-muted">{lockout ? `Whole days, midnight to midnight, studio time (${timeZone}).` : `Studio time (${timeZone}).`}</p>
         <div className="grid gap-4 sm:grid-cols-2">
