@@ -14,6 +14,29 @@ export default tseslint.config(
     },
   },
   {
+    // One way to a database handle: createDb() retries deadlocked transactions (decision 010).
+    files: ["apps/**/*.{ts,tsx}", "packages/**/*.ts"],
+    ignores: ["packages/db/src/client.ts"],
+    rules: {
+      "no-restricted-imports": [
+        "error",
+        { paths: [{ name: "drizzle-orm/mysql2", importNames: ["drizzle"], message: "Use createDb() from @takeup/db: it retries transactions InnoDB gives up on (decision 010)." }] },
+      ],
+    },
+  },
+  {
+    // Every export writes its rows through lib/spreadsheet.ts, which neutralises formulas (OWASP CSV injection).
+    files: ["apps/api/src/**/*.ts"],
+    ignores: ["**/*.test.ts"],
+    rules: {
+      "no-restricted-syntax": [
+        "error",
+        { selector: "CallExpression[callee.property.name='addRow']", message: "Use addSafeRow() from lib/spreadsheet.ts: it keeps names from becoming formulas." },
+        { selector: "CallExpression[callee.property.name='addRows']", message: "Use addSafeRow() from lib/spreadsheet.ts: it keeps names from becoming formulas." },
+      ],
+    },
+  },
+  {
     files: ["scripts/**/*.mjs"],
     languageOptions: { globals: { process: "readonly", console: "readonly", URL: "readonly", fetch: "readonly", setTimeout: "readonly" } },
   },

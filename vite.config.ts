@@ -1,6 +1,7 @@
 import { defineConfig } from "vitest/config";
 import react from "@vitejs/plugin-react";
 import tailwindcss from "@tailwindcss/vite";
+import { browserPollIntervalMs, browserWaitMs } from "./tests/support/waits";
 
 const apiPort = Number(process.env.API_PORT ?? 3000);
 
@@ -8,7 +9,8 @@ const apiPort = Number(process.env.API_PORT ?? 3000);
 export default defineConfig({
   root: "apps/web",
   plugins: [react(), tailwindcss()],
-  build: { outDir: "dist", emptyOutDir: true, sourcemap: true, chunkSizeWarningLimit: 900 },
+  // No source maps in the production build: the API serves dist/ to anyone (decision 002).
+  build: { outDir: "dist", emptyOutDir: true, sourcemap: false, chunkSizeWarningLimit: 900 },
   server: {
     port: 5173,
     proxy: { "/api": { target: `http://127.0.0.1:${apiPort}`, changeOrigin: false } },
@@ -46,6 +48,8 @@ export default defineConfig({
           include: ["src/**/*.test.{ts,tsx}"],
           setupFiles: ["./src/test/setup.ts", "../../tests/support/fail-on-console-error.ts"],
           css: false,
+          // Typing into forms in jsdom takes seconds on a loaded 2-core machine; 5 s is not enough.
+          testTimeout: 30000,
         },
       },
       {
@@ -55,9 +59,11 @@ export default defineConfig({
           environment: "node",
           include: ["**/*.spec.ts"],
           setupFiles: ["../support/fail-on-console-error.ts"],
-          testTimeout: 60000,
+          testTimeout: 120000,
           hookTimeout: 60000,
           fileParallelism: false,
+          // Every expect.poll waits as long as a loaded 2-core machine needs (tests/support/waits.ts).
+          expect: { poll: { timeout: browserWaitMs, interval: browserPollIntervalMs } },
         },
       },
     ],

@@ -85,10 +85,14 @@ export function ensureDebianPackage(command, pkg) {
   log(`installing Debian's ${pkg} (needed for ${command}) …`);
   const env = { ...process.env, DEBIAN_FRONTEND: "noninteractive" };
   const quiet = { stdio: ["ignore", "ignore", "inherit"], env };
-  const attempt = spawnSync("apt-get", ["install", "-y", "--no-install-recommends", pkg], quiet);
-  if (attempt.status !== 0) {
-    run("apt-get", ["update"], quiet);
-    run("apt-get", ["install", "-y", "--no-install-recommends", pkg], quiet);
+  // Another start or test run may be installing at the same moment: wait for dpkg's lock
+  // instead of failing on it.
+  const waitForLock = ["-o", "DPkg::Lock::Timeout=900"];
+  const install = [...waitForLock, "install", "-y", "--no-install-recommends", pkg];
+  const attempt = spawnSync("apt-get", install, quiet);
+  if (attempt.status !== 0 && !which(command)) {
+    run("apt-get", [...waitForLock, "update"], quiet);
+    run("apt-get", install, quiet);
   }
   if (!which(command)) fail(`installed ${pkg} but ${command} is still missing`);
 }

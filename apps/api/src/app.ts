@@ -2,7 +2,6 @@ import path from "node:path";
 import { existsSync } from "node:fs";
 import express from "express";
 import helmet from "helmet";
-import { toNodeHandler } from "better-auth/node";
 import type { Db } from "@takeup/db";
 import type { AppConfig } from "./config.ts";
 import { createAuth } from "./auth.ts";
@@ -11,8 +10,9 @@ import type { Mailer } from "./lib/mailer.ts";
 import { logger } from "./lib/logger.ts";
 import { buildOpenApi } from "./lib/openapi.ts";
 import { createSessionReader } from "./lib/session.ts";
-import { SignInThrottle } from "./lib/sign-in-throttle.ts";
+import { SignInThrottle, type ThrottlePolicy } from "./lib/sign-in-throttle.ts";
 import { HttpError } from "./lib/http-error.ts";
+import { databaseProbe } from "./lib/database-probe.ts";
 import { errorHandler, notFoundJson } from "./middleware/error-handler.ts";
 import { sameOrigin } from "./middleware/same-origin.ts";
 import { auditRouter } from "./routes/audit/audit.router.ts";
@@ -32,14 +32,14 @@ import { calendarFeedsRouter, feedsRouter } from "./routes/calendar-feeds/calend
 import { timeClockRouter, timeEditsRouter, timeEntriesRouter } from "./routes/time-clock/time-clock.router.ts";
 import { payPeriodsRouter, payRatesRouter, payrollSettingsRouter } from "./routes/payroll/payroll.router.ts";
 
-export type AppDeps = { db: Db; config: AppConfig; mailer: Mailer; throttle?: SignInThrottle };
+export type AppDeps = { db: Db; config: AppConfig; mailer: Mailer; throttlePolicy?: Partial<ThrottlePolicy> };
 
 /** Every API router, in mount order; the OpenAPI document and the access tests read this list. */
 export function apiRouters(deps: Deps) {
   return [
     healthRouter(deps),
     sessionRouter(deps),
-    meRouter(),
+    meRouter(deps),
     invitationsRouter(deps),
     studioRouter(deps),
     staffRouter(deps),
@@ -65,15 +65,26 @@ export function apiRouters(deps: Deps) {
   ];
 }
 
-// better-auth endpoints our own routes stand in front of (throttled sign-in; no self sign-up).
-const closedAuthPaths = ["/api/auth/sign-in/email", "/api/auth/sign-up/email"];
+/** A path whose percent-encoding does not decode (`/api/clients/%`, `/assets/%`) is a 400, on every route. */
+const refuseUndecodablePaths: express.RequestHandler = (req, _res, next) => {
+  try {
+    decodeURIComponent(req.path);
+  } catch {
+    throw new HttpError(400, "bad_path", "The address has a broken %-escape", [
+      { field: "(path)", rule: "percent_encoding", message: "Write % as %25" },
+    ]);
+  }
+  next();
+};
 
 /** Builds the app without listening: server.ts listens, tests drive it with supertest. */
-export function createApp({ db, config, mailer, throttle = new SignInThrottle() }: AppDeps) {
+export function createApp({ db, config, mailer, throttlePolicy }: AppDeps) {
+  const throttle = new SignInThrottle(db, throttlePolicy);
   const auth = createAuth(db, config, mailer);
   const deps: Deps = { db, config, mailer, auth, throttle };
   const sessions = createSessionReader(auth, db);
   const routers = apiRouters(deps);
+  const databaseReachable = databaseProbe(db);
   const openApi = buildOpenApi(routers.flatMap((r) => r.routes));
 
   const app = express();
@@ -87,21 +98,25 @@ export function createApp({ db, config, mailer, throttle = new SignInThrottle() 
       strictTransportSecurity: config.appUrl.startsWith("https://"),
     }),
   );
+  app.use(refuseUndecodablePaths);
   app.use("/api", sameOrigin([config.appUrl]));
-  app.all(closedAuthPaths, () => {
-    throw new HttpError(404, "not_found", "Sign in through /api/session");
-  });
-  // better-auth reads its own request bodies, so it is mounted before express.json().
-  app.all("/api/auth/*splat", toNodeHandler(auth));
+  // better-auth's own HTTP handler is not mounted at all (decision 008): our routes call auth.api.*,
+  // so no spelling of a path can reach one of its endpoints past our throttle and limits.
   app.use("/api", express.json({ limit: "200kb" }));
   app.get("/api/openapi.json", (_req, res) => {
     res.json(openApi);
   });
-  for (const router of routers) app.use(router.base, router.toExpress(sessions));
+  // Tests parse every answer against its contract, so a response that drifts fails a test.
+  const checkResponses = config.checkResponses ?? process.env.NODE_ENV === "test";
+  for (const router of routers) app.use(router.base, router.toExpress(sessions, { checkResponses }));
   app.use("/api", notFoundJson);
 
   if (config.webDist && existsSync(path.join(config.webDist, "index.html"))) {
     const indexHtml = path.join(config.webDist, "index.html");
+    // The build makes no source maps (vite.config.ts); should one appear in dist, it still stays private.
+    app.get(/\.map$/i, () => {
+      throw new HttpError(404, "not_found", "No such file");
+    });
     app.use("/assets", express.static(path.join(config.webDist, "assets"), { immutable: true, maxAge: "1y" }));
     app.use(express.static(config.webDist, { index: false }));
     // "/{*splat}" also matches "/" itself, which "/*splat" does not in Express 5.
@@ -111,6 +126,6 @@ export function createApp({ db, config, mailer, throttle = new SignInThrottle() 
     });
   }
 
-  app.use(errorHandler(logger));
+  app.use(errorHandler(logger, databaseReachable));
   return Object.assign(app, { routes: routers.flatMap((r) => r.routes), auth });
 }

@@ -1,8 +1,10 @@
 import { APIError, betterAuth } from "better-auth";
 import { drizzleAdapter } from "better-auth/adapters/drizzle";
+import { and, eq, like, ne } from "drizzle-orm";
 import { account, session, user, verification, type Db } from "@takeup/db";
 import type { AppConfig } from "./config.ts";
 import { loadActor } from "./lib/actor.ts";
+import { logger } from "./lib/logger.ts";
 import type { Mailer } from "./lib/mailer.ts";
 import { passwordResetEmail } from "./emails/password-reset.ts";
 import { loadStudio } from "./routes/studio/studio.service.ts";
@@ -15,6 +17,11 @@ export function createAuth(db: Db, config: AppConfig, mailer: Mailer) {
     secret: config.authSecret,
     database: drizzleAdapter(db, { provider: "mysql", schema: { user, session, account, verification } }),
     telemetry: { enabled: false },
+    // Its messages join ours as one-line JSON (a failed query during a database outage, say).
+    logger: {
+      level: "warn",
+      log: (level, message, ...args) => (level === "error" ? logger.error : logger.warn)(`better-auth: ${message}`, { details: args.map(String) }),
+    },
     trustedOrigins: [config.appUrl],
     emailAndPassword: {
       enabled: true,
@@ -24,8 +31,18 @@ export function createAuth(db: Db, config: AppConfig, mailer: Mailer) {
       maxPasswordLength: 128,
       revokeSessionsOnPasswordReset: true,
       resetPasswordTokenExpiresIn: 60 * 60,
-      sendResetPassword: async ({ user: recipient, url }) => {
+      // A successful reset ends every other link still out for the account.
+      onPasswordReset: async ({ user: changed }) => {
+        await db.delete(verification).where(and(like(verification.identifier, "reset-password:%"), eq(verification.value, changed.id)));
+      },
+      // The link goes straight to our reset page: better-auth's own /api/auth handler is not mounted.
+      sendResetPassword: async ({ user: recipient, token }) => {
+        // A newer link ends every older one, so only the latest e-mail works.
+        await db
+          .delete(verification)
+          .where(and(like(verification.identifier, "reset-password:%"), eq(verification.value, recipient.id), ne(verification.identifier, `reset-password:${token}`)));
         const studio = await loadStudio(db);
+        const url = `${config.appUrl}/reset-password?token=${encodeURIComponent(token)}`;
         await mailer.send(passwordResetEmail({ studioName: studio.name, to: recipient.email, name: recipient.name, url }));
       },
     },

@@ -12,6 +12,8 @@ export type AppConfig = {
   /** The built web app to serve beside /api; absent in API tests and in `npm run dev`. */
   webDist?: string;
   trustProxy: boolean;
+  /** Parse every answer against its route contract (on by default under NODE_ENV=test). */
+  checkResponses?: boolean;
 };
 
 const repoRoot = path.resolve(path.dirname(fileURLToPath(import.meta.url)), "../../..");
@@ -19,6 +21,8 @@ const repoRoot = path.resolve(path.dirname(fileURLToPath(import.meta.url)), "../
 const envSchema = z.object({
   DATABASE_URL: z.string().startsWith("mysql://", "DATABASE_URL must be a mysql:// URL"),
   PORT: z.coerce.number().int().min(1).max(65535).default(3000),
+  // Loopback unless told otherwise: in production a reverse proxy on the same host forwards to it.
+  HOST: z.string().trim().min(1, "HOST must name an interface address").max(253).default("127.0.0.1"),
   APP_URL: z.url().default("http://localhost:3000"),
   AUTH_SECRET: z.string().min(32, "AUTH_SECRET must be at least 32 characters"),
   SMTP_URL: z.string().default("smtp://127.0.0.1:1025"),
@@ -44,5 +48,5 @@ export function readConfig(env: NodeJS.ProcessEnv = process.env) {
     webDist: e.WEB_DIST ?? path.join(repoRoot, "apps/web/dist"),
     trustProxy: e.TRUST_PROXY === "1",
   };
-  return { config, databaseUrl: e.DATABASE_URL, port: e.PORT };
+  return { config, databaseUrl: e.DATABASE_URL, port: e.PORT, host: e.HOST };
 }

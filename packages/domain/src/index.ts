@@ -3,6 +3,7 @@ export * from "./shared/currency.ts";
 export * from "./shared/time-zone.ts";
 export { localDateTime, offsetMinutesAt } from "./shared/zone-offset.ts";
 export * from "./contracts/common.ts";
+export * from "./contracts/route.ts";
 export * from "./contracts/health.ts";
 export * from "./contracts/me.ts";
 export * from "./contracts/studio.ts";

@@ -2,6 +2,7 @@
 // `npm test` started (E2E_BASE_URL). A page error or console error fails the journey.
 import { chromium, type Browser, type BrowserContext, type Page } from "playwright-core";
 import { afterAll, afterEach, beforeAll, expect } from "vitest";
+import { browserWaitMs } from "../../support/waits";
 
 export const baseUrl = process.env.E2E_BASE_URL ?? "http://localhost:3100";
 const mailUrl = process.env.E2E_MAIL_URL ?? "http://127.0.0.1:2580";
@@ -37,6 +38,8 @@ export function useBrowser() {
 /** A fresh browser profile (own cookies) with one page. */
 export async function newPage(viewport = desktop): Promise<{ context: BrowserContext; page: Page }> {
   const context = await browser.newContext({ viewport, baseURL: baseUrl, locale: "en-US" });
+  context.setDefaultTimeout(browserWaitMs);
+  context.setDefaultNavigationTimeout(browserWaitMs);
   const page = await context.newPage();
   page.on("pageerror", (error) => problems.push(`page error: ${error.message}`));
   page.on("console", (message) => {
@@ -56,7 +59,7 @@ export async function signIn(page: Page, email: string, password = demoPassword)
 type Caught = { to: string[]; subject: string; text: string };
 
 /** Waits for an e-mail to arrive at the local catcher and returns the newest one. */
-export async function waitForMail(to: string, timeoutMs = 10000): Promise<Caught> {
+export async function waitForMail(to: string, timeoutMs = browserWaitMs): Promise<Caught> {
   const started = Date.now();
   for (;;) {
     const response = await fetch(`${mailUrl}/messages?to=${encodeURIComponent(to)}`);

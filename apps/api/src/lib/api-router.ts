@@ -1,10 +1,12 @@
 import { Router, type Request, type Response } from "express";
-import type { z } from "zod";
-import { requireRole, type Access } from "../middleware/require-role.ts";
+import { z } from "zod";
+import type { Access, RouteContract } from "@takeup/domain";
+import { requireRole } from "../middleware/require-role.ts";
 import type { Actor } from "./actor.ts";
+import { HttpError, type ErrorDetail } from "./http-error.ts";
 import type { SessionReader } from "./session.ts";
 
-type Method = "get" | "post" | "patch" | "put" | "delete";
+type Method = RouteContract["method"];
 type Schema = z.ZodType;
 type Parsed<S> = S extends z.ZodType ? z.output<S> : undefined;
 
@@ -37,6 +39,14 @@ export type RegisteredRoute = RouteSpec<Schema | undefined, Schema | undefined, 
   tag: string;
 };
 
+type ContractContext<C extends RouteContract> = RouteContext<C["params"], C["query"], C["body"], C["access"]>;
+type ContractAnswer<C extends RouteContract> = C["response"] extends Schema ? z.input<C["response"]> : unknown;
+
+export type ToExpressOptions = {
+  /** Parse every success answer with its declared schema (tests): contract drift becomes a 500 that names it. */
+  checkResponses?: boolean;
+};
+
 /**
  * The one way to declare an API route: it mounts the handler behind requireRole and the zod
  * contracts, and records the route so the OpenAPI document and the access tests see it.
@@ -56,10 +66,21 @@ export class ApiRouter {
     return this;
   }
 
-  toExpress(sessions: SessionReader): Router {
+  /** Mounts a route declared once in `@takeup/domain`'s contracts, which the web's fetchers share. */
+  handle<const C extends RouteContract>(contract: C, handler: (ctx: ContractContext<C>) => Promise<ContractAnswer<C>>): this {
+    if (contract.path !== this.base && !contract.path.startsWith(`${this.base}/`)) {
+      throw new Error(`${contract.method.toUpperCase()} ${contract.path} does not belong under ${this.base}`);
+    }
+    const path = contract.path.slice(this.base.length) || "/";
+    this.routes.push({ ...contract, path, handler: handler as RegisteredRoute["handler"], fullPath: this.base + path, tag: this.tag });
+    return this;
+  }
+
+  toExpress(sessions: SessionReader, { checkResponses = false }: ToExpressOptions = {}): Router {
     const router = Router();
     for (const spec of this.routes) {
       router[spec.method](spec.path, requireRole(sessions, spec.access), async (req, res) => {
+        refuseUnpairedSurrogates({ ...req.params }, req.query, req.body);
         const ctx = {
           req,
           res,
@@ -70,11 +91,65 @@ export class ApiRouter {
         };
         const result = await spec.handler(ctx as never);
         if (spec.response === "file" || res.headersSent) return;
-        if (result === undefined) res.status(spec.status ?? 204).end();
+        if (result === undefined) {
+          res.status(spec.status ?? 204).end();
+          return;
+        }
         // A handler may pick its own status (health answers 503 with a body).
-        else res.status(res.statusCode !== 200 ? res.statusCode : (spec.status ?? 200)).json(result);
+        const status = res.statusCode !== 200 ? res.statusCode : (spec.status ?? 200);
+        if (checkResponses && status < 300) assertAnswerKeepsContract(spec, result);
+        res.status(status).json(result);
       });
     }
     return router;
+  }
+}
+
+function assertAnswerKeepsContract(spec: RegisteredRoute, result: unknown) {
+  if (!spec.response || spec.response === "file") {
+    throw new HttpError(500, "contract_drift", `${spec.method.toUpperCase()} ${spec.fullPath} answered a body but declares none`);
+  }
+  // Round-trip through JSON first: the client sees dates as strings, not Date objects.
+  const parsed = spec.response.safeParse(JSON.parse(JSON.stringify(result)));
+  if (!parsed.success) {
+    const problems = parsed.error.issues.map((i) => `${i.path.join(".") || "(body)"}: ${i.message}`).join("; ");
+    throw new HttpError(500, "contract_drift", `${spec.method.toUpperCase()} ${spec.fullPath} broke its response contract: ${problems}`);
+  }
+}
+
+const unpairedSurrogate = /[\uD800-\uDBFF](?![\uDC00-\uDFFF])|(?<![\uD800-\uDBFF])[\uDC00-\uDFFF]/;
+// No contract nests deeper than a few levels; this also keeps the walk's recursion shallow.
+const maxDepth = 32;
+
+/**
+ * JSON may carry "\ud800", half of a UTF-16 pair: not text, and MariaDB's utf8mb4 cannot store it
+ * (the driver would quietly write U+FFFD). One check for every route, before any schema runs.
+ */
+function refuseUnpairedSurrogates(...inputs: unknown[]) {
+  const details: ErrorDetail[] = [];
+  const visit = (value: unknown, path: string[]) => {
+    if (details.length >= 20) return;
+    if (path.length > maxDepth) {
+      details.push({ field: path.slice(0, 3).join(".") + "…", rule: "too_deep", message: `Nest at most ${maxDepth} levels` });
+    } else if (typeof value === "string") {
+      if (unpairedSurrogate.test(value)) {
+        details.push({
+          field: path.join(".") || "(body)",
+          rule: "unpaired_surrogate",
+          message: "Contains half of a UTF-16 character pair, which is not valid text",
+        });
+      }
+    } else if (Array.isArray(value)) {
+      value.forEach((item, i) => visit(item, [...path, String(i)]));
+    } else if (value && typeof value === "object") {
+      for (const [key, item] of Object.entries(value)) {
+        visit(key, path);
+        visit(item, [...path, key]);
+      }
+    }
+  };
+  for (const input of inputs) visit(input, []);
+  if (details.length > 0) {
+    throw new HttpError(400, "invalid_input", `Check the request: ${details.map((d) => `${d.field}: ${d.message}`).join("; ")}`, details);
   }
 }

@@ -1,4 +1,5 @@
 import { z } from "zod";
+import { apiErrorDto } from "@takeup/domain";
 import type { RegisteredRoute } from "./api-router.ts";
 
 const toOpenApiPath = (path: string) => path.replace(/\/$/, "").replace(/:([A-Za-z]+)/g, "{$1}") || "/";
@@ -46,21 +47,8 @@ export function buildOpenApi(routes: RegisteredRoute[]) {
     paths,
     components: {
       schemas: {
-        Error: {
-          type: "object",
-          required: ["error"],
-          properties: {
-            error: {
-              type: "object",
-              required: ["code", "message"],
-              properties: {
-                code: { type: "string" },
-                message: { type: "string" },
-                details: { type: "array", items: { type: "object", properties: { field: { type: "string" }, rule: { type: "string" }, message: { type: "string" } } } },
-              },
-            },
-          },
-        },
+        // The one error shape every route answers with, from the same contract the web parses.
+        Error: jsonSchema(apiErrorDto, "output"),
       },
     },
   };

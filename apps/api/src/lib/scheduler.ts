@@ -2,6 +2,7 @@ import { and, eq, gt, isNull, lte } from "drizzle-orm";
 import { bookings, type Db } from "@takeup/db";
 import type { Mailer } from "./mailer.ts";
 import { logger } from "./logger.ts";
+import { SignInThrottle } from "./sign-in-throttle.ts";
 import { loadStudio } from "../routes/studio/studio.service.ts";
 import { expireLapsedHolds } from "../routes/bookings/holds.ts";
 import { loadBookingDtos } from "../routes/bookings/booking-dto.ts";
@@ -34,7 +35,7 @@ export async function sendReminders(db: Db, mailer: Mailer, now = new Date()) {
   return due.length;
 }
 
-/** The API's background work: lapse holds, send notices and reminders, once a minute. */
+/** The API's background work: lapse holds, send notices and reminders, drop spent throttle counters, once a minute. */
 export function startScheduler(db: Db, mailer: Mailer, everyMs = 60_000) {
   let running = false;
   const tick = async () => {
@@ -45,6 +46,7 @@ export function startScheduler(db: Db, mailer: Mailer, everyMs = 60_000) {
       await expireLapsedHolds(db, studio);
       await sendHoldNotices(db, mailer);
       await sendReminders(db, mailer);
+      await new SignInThrottle(db).purgeExpired();
     } catch (error) {
       logger.error("scheduled work failed", { reason: error instanceof Error ? error.message : String(error) });
     } finally {

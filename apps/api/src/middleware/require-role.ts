@@ -1,10 +1,9 @@
 import type { RequestHandler } from "express";
-import type { Role } from "@takeup/domain";
+import type { Access } from "@takeup/domain";
 import { HttpError } from "../lib/http-error.ts";
 import type { SessionReader } from "../lib/session.ts";
 
-/** Who may call a route: anyone, anyone signed in, or the listed roles (docs/roles.md). */
-export type Access = "public" | "signed-in" | readonly Role[];
+export type { Access };
 
 /**
  * The one place access is decided. It resolves the signed-in actor (401 when there is none

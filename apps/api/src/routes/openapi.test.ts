@@ -19,15 +19,26 @@ describe("GET /api/openapi.json", () => {
     expect(documented.sort()).toEqual(mounted.sort());
   });
 
-  it("answers every documented operation from a mounted handler, never the API's 404", async () => {
-    const doc = (await t.client().get("/api/openapi.json")).body as { paths: Record<string, Record<string, unknown>> };
+  it("answers every documented operation from a mounted handler: 401 signed out, never the API's 404 or a 5xx", async () => {
+    const doc = (await t.client().get("/api/openapi.json")).body as { paths: Record<string, Record<string, { "x-access": unknown }>> };
     for (const [p, ops] of Object.entries(doc.paths)) {
-      for (const method of Object.keys(ops)) {
+      for (const [method, operation] of Object.entries(ops)) {
         const url = p.replace(/\{[^}]+\}/g, "1");
         const response = await t.client()[method as "get"](url);
-        expect(response.body?.error?.message ?? "", `${method} ${p}`).not.toMatch(/^No API route/);
+        const call = `${method.toUpperCase()} ${p} → ${response.status}`;
+        expect(response.body?.error?.message ?? "", call).not.toMatch(/^No API route/);
+        expect(response.status, call).toBeLessThan(500);
+        if (operation["x-access"] !== "public") expect(response.status, call).toBe(401);
       }
     }
+  });
+
+  it("documents the error shape from the same contract the web parses", async () => {
+    const doc = (await t.client().get("/api/openapi.json")).body;
+    const error = doc.components.schemas.Error;
+    expect(error.required).toEqual(["error"]);
+    expect(error.properties.error.required).toEqual(expect.arrayContaining(["code", "message"]));
+    expect(error.properties.error.properties.details.items.required).toEqual(expect.arrayContaining(["field", "rule", "message"]));
   });
 
   it("describes request bodies from the zod contracts, with their limits", async () => {

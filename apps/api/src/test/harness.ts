@@ -10,7 +10,7 @@ import { startMailCatcher, type CaughtMessage } from "@takeup/mail-catcher";
 import { createApp } from "../app.ts";
 import type { AppConfig } from "../config.ts";
 import { createMailer } from "../lib/mailer.ts";
-import type { SignInThrottle } from "../lib/sign-in-throttle.ts";
+import type { ThrottlePolicy } from "../lib/sign-in-throttle.ts";
 
 export const appUrl = "http://localhost:3100";
 export { demoPassword };
@@ -21,7 +21,7 @@ function serverUrl(): URL {
   return new URL(url);
 }
 
-export async function createTestApp(options: { throttle?: SignInThrottle; seed?: boolean } = {}) {
+export async function createTestApp(options: { throttlePolicy?: Partial<ThrottlePolicy>; seed?: boolean } = {}) {
   const base = serverUrl();
   const name = `takeup_test_${randomBytes(5).toString("hex")}`;
   const admin = await mysql.createConnection({ uri: base.toString(), multipleStatements: false });
@@ -43,7 +43,7 @@ export async function createTestApp(options: { throttle?: SignInThrottle; seed?:
     trustProxy: false,
   };
   const mailer = createMailer(db, config.smtpUrl, config.mailFrom, async () => "Wrenfield Sound");
-  const app = createApp({ db, config, mailer, throttle: options.throttle });
+  const app = createApp({ db, config, mailer, throttlePolicy: options.throttlePolicy });
 
   /** A cookie-keeping client that behaves like our own web page (same Origin). */
   const client = () => request.agent(app).set("Origin", appUrl);
@@ -66,7 +66,7 @@ export async function createTestApp(options: { throttle?: SignInThrottle; seed?:
     await pool.end();
   }
 
-  return { app, db, pool, config, client, signIn, mailTo, close, databaseName: name };
+  return { app, db, pool, config, mailer, catcher, client, signIn, mailTo, close, databaseName: name };
 }
 
 export type TestApp = Awaited<ReturnType<typeof createTestApp>>;

@@ -1,5 +1,5 @@
 import type { z } from "zod";
-import { apiErrorDto, type ApiErrorDto } from "@takeup/domain";
+import { apiErrorDto, routeUrl, type ApiErrorDto, type RouteContract, type RouteInput, type RouteResponse } from "@takeup/domain";
 
 export type ApiErrorDetail = NonNullable<ApiErrorDto["error"]["details"]>[number];
 
@@ -26,7 +26,7 @@ export function errorMessage(error: unknown): string {
   return "Something went wrong. Try again in a moment.";
 }
 
-type Method = "GET" | "POST" | "PATCH" | "DELETE";
+type Method = "GET" | "POST" | "PATCH" | "PUT" | "DELETE";
 
 type RequestOptions<T> = {
   method?: Method;
@@ -91,3 +91,21 @@ export const api = {
   patch: <T>(path: string, body: unknown, schema?: z.ZodType<T>) => apiRequest<T>(path, { method: "PATCH", body, schema }),
   delete: <T>(path: string, schema?: z.ZodType<T>) => apiRequest<T>(path, { method: "DELETE", schema }),
 };
+
+type CallOptions<C extends RouteContract> = RouteInput<C> & { signal?: AbortSignal };
+type CallArgs<C extends RouteContract> = object extends RouteInput<C> ? [options?: CallOptions<C>] : [options: CallOptions<C>];
+
+/**
+ * Calls the route a shared contract declares: the path, its parameters, the query and the body
+ * are typed by that contract, and the answer is parsed with its response schema.
+ */
+export function callApi<const C extends RouteContract>(contract: C, ...[options]: CallArgs<C>): Promise<RouteResponse<C>> {
+  const { params, query, body, signal } = (options ?? {}) as { params?: Record<string, unknown>; query?: Record<string, unknown>; body?: unknown; signal?: AbortSignal };
+  const schema = contract.response && contract.response !== "file" ? (contract.response as z.ZodType<RouteResponse<C>>) : undefined;
+  return apiRequest<RouteResponse<C>>(routeUrl(contract.path, params, query), {
+    method: contract.method.toUpperCase() as Method,
+    body,
+    schema,
+    signal,
+  });
+}

@@ -1,6 +1,10 @@
 import "@testing-library/jest-dom/vitest";
-import { cleanup } from "@testing-library/react";
+import { cleanup, configure } from "@testing-library/react";
 import { afterEach, vi } from "vitest";
+import { componentWaitMs } from "../../../../tests/support/waits";
+
+// findBy*/waitFor give up after 1 s by default: too short on a loaded 2-core machine.
+configure({ asyncUtilTimeout: componentWaitMs });
 
 afterEach(() => {
   cleanup();

@@ -5,3 +5,4 @@ export * from "./audit.ts";
 export * from "./rooms.ts";
 export * from "./bookings.ts";
 export * from "./time.ts";
+export * from "./throttle.ts";

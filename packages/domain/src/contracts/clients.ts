@@ -1,5 +1,6 @@
 import { z } from "zod";
-import { emailAddress, optionalEmail, optionalText, personName } from "./common.ts";
+import { emailAddress, idParams, optionalEmail, optionalText, personName, userIdParams } from "./common.ts";
+import { defineRoute } from "./route.ts";
 import { pendingInvitationDto } from "./staff.ts";
 
 export const clientKinds = ["band", "producer", "label"] as const;
@@ -73,3 +74,63 @@ export const inviteClientUserInput = z.strictObject({ name: personName, email: e
 export type InviteClientUserInput = z.infer<typeof inviteClientUserInput>;
 
 export const updateClientUserInput = z.strictObject({ active: z.boolean() });
+
+export const clientUserParams = idParams.extend(userIdParams.shape);
+
+const staffWhoBook = ["owner", "manager"] as const;
+
+/** The client-account routes, declared once for the API and the web. */
+export const clientRoutes = {
+  list: defineRoute({
+    method: "get",
+    path: "/api/clients",
+    summary: "All client accounts (bands, producers, labels)",
+    access: ["owner", "manager", "bookkeeper"],
+    response: z.array(clientSummaryDto),
+  }),
+  create: defineRoute({
+    method: "post",
+    path: "/api/clients",
+    summary: "Add a client account with its contacts",
+    access: staffWhoBook,
+    body: createClientInput,
+    status: 201,
+    response: clientDetailDto,
+  }),
+  get: defineRoute({
+    method: "get",
+    path: "/api/clients/:id",
+    summary: "One client account with contacts and sign-ins (a client sees only its own)",
+    access: ["owner", "manager", "bookkeeper", "client"],
+    params: idParams,
+    response: clientDetailDto,
+  }),
+  update: defineRoute({
+    method: "patch",
+    path: "/api/clients/:id",
+    summary: "Change a client account; contacts, when sent, replace the list",
+    access: staffWhoBook,
+    params: idParams,
+    body: updateClientInput,
+    response: clientDetailDto,
+  }),
+  inviteUser: defineRoute({
+    method: "post",
+    path: "/api/clients/:id/invitations",
+    summary: "Invite a client user to this account by e-mail",
+    access: staffWhoBook,
+    params: idParams,
+    body: inviteClientUserInput,
+    status: 201,
+    response: pendingInvitationDto,
+  }),
+  setUserActive: defineRoute({
+    method: "patch",
+    path: "/api/clients/:id/users/:userId",
+    summary: "Deactivate (ends their sessions at once) or reactivate a client user",
+    access: staffWhoBook,
+    params: clientUserParams,
+    body: updateClientUserInput,
+    response: clientDetailDto,
+  }),
+};

@@ -9,3 +9,19 @@ export const meDto = z.object({
   clientAccount: z.object({ id: z.number(), name: z.string() }).nullable(),
 });
 export type MeDto = z.infer<typeof meDto>;
+
+/** Characters a display name may not hold: controls (including line breaks), bidirectional overrides, markup. */
+const notPlainText = /[\p{Cc}\u200E\u200F\u202A-\u202E\u2066-\u2069<>]/u;
+
+/** The name people give themselves: plain text, trimmed, 1–100 characters, well-formed Unicode. */
+export const profileName = z
+  .string()
+  .trim()
+  .min(1, "Enter a name")
+  .max(100, "Use at most 100 characters")
+  // Under the u flag a lone surrogate half is its own code point, of category Cs; a pair is not.
+  .refine((v) => !/\p{Cs}/u.test(v), "Use only complete characters (no lone surrogate halves)")
+  .refine((v) => !notPlainText.test(v), "Use plain text: no line breaks, control or direction characters, < or >");
+
+export const updateMeInput = z.strictObject({ name: profileName });
+export type UpdateMeInput = z.infer<typeof updateMeInput>;

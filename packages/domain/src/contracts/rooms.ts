@@ -1,6 +1,7 @@
 import { z } from "zod";
 import { engineerGrades, equipmentKinds, roomColours, tapeWidthsMils } from "../rooms/catalogue.ts";
-import { optionalText } from "./common.ts";
+import { idParams, optionalText } from "./common.ts";
+import { defineRoute } from "./route.ts";
 
 const cents = (what: string) => z.number().int(`${what} is in whole cents`).min(0).max(100_000_000);
 const minuteOfDay = z.number().int().min(0).max(1440);
@@ -132,3 +133,31 @@ export const engineerDto = z.object({
   grade: z.enum(engineerGrades),
 });
 export type EngineerDto = z.infer<typeof engineerDto>;
+
+export const equipmentRoutes = {
+  list: defineRoute({
+    method: "get",
+    path: "/api/equipment",
+    summary: "All equipment, with the room each piece lives in",
+    access: ["owner", "manager", "engineer"],
+    response: z.array(equipmentDto),
+  }),
+  create: defineRoute({
+    method: "post",
+    path: "/api/equipment",
+    summary: "Add a piece of equipment",
+    access: ["owner"],
+    body: createEquipmentInput,
+    status: 201,
+    response: equipmentDto,
+  }),
+  update: defineRoute({
+    method: "patch",
+    path: "/api/equipment/:id",
+    summary: "Change a piece of equipment, or move it to another room",
+    access: ["owner"],
+    params: idParams,
+    body: updateEquipmentInput,
+    response: equipmentDto,
+  }),
+};

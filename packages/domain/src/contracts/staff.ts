@@ -1,6 +1,7 @@
 import { z } from "zod";
 import { staffRoles } from "../auth/roles.ts";
-import { emailAddress, personName } from "./common.ts";
+import { emailAddress, personName, userIdParams } from "./common.ts";
+import { defineRoute } from "./route.ts";
 
 export const staffMemberDto = z.object({
   userId: z.string(),
@@ -43,3 +44,31 @@ export const updateStaffInput = z
     message: "Send a role or an active flag",
   });
 export type UpdateStaffInput = z.infer<typeof updateStaffInput>;
+
+export const staffRoutes = {
+  list: defineRoute({
+    method: "get",
+    path: "/api/staff",
+    summary: "Everyone on the team, and invitations not yet accepted",
+    access: ["owner"],
+    response: staffListDto,
+  }),
+  invite: defineRoute({
+    method: "post",
+    path: "/api/staff/invitations",
+    summary: "Invite a member of staff by e-mail",
+    access: ["owner"],
+    body: inviteStaffInput,
+    status: 201,
+    response: pendingInvitationDto,
+  }),
+  update: defineRoute({
+    method: "patch",
+    path: "/api/staff/:userId",
+    summary: "Change a member's role, or deactivate (ends their sessions at once) or reactivate them",
+    access: ["owner"],
+    params: userIdParams,
+    body: updateStaffInput,
+    response: staffMemberDto,
+  }),
+};

@@ -62,17 +62,19 @@ export async function expireLapsedHolds(db: Db, studio: StudioDto, now = new Dat
     .limit(500);
   let count = 0;
   for (const { id } of lapsed) {
-    await db.transaction(
+    // Counted after the commit: a transaction may run more than once (decision 010).
+    const lapsedNow = await db.transaction(
       async (tx) => {
         const [hold] = await tx.select().from(bookings).where(eq(bookings.id, id)).for("update");
-        if (!hold || hold.status !== "hold" || hold.queuedBehindId || !hold.holdExpiresAt || hold.holdExpiresAt > now) return;
+        if (!hold || hold.status !== "hold" || hold.queuedBehindId || !hold.holdExpiresAt || hold.holdExpiresAt > now) return false;
         await tx.update(bookings).set({ status: "cancelled", cancelledAt: now, cancellationReason: "The hold lapsed" }).where(eq(bookings.id, id));
         await writeAudit(tx, null, "booking.hold_lapsed", { type: "booking", id }, { before: { status: "hold" }, after: { status: "cancelled" } });
         await promoteNextHold(tx, id, studio, now);
-        count++;
+        return true;
       },
       { isolationLevel: "read committed" },
     );
+    if (lapsedNow) count++;
   }
   return count;
 }

@@ -47,7 +47,8 @@ export function feedsRouter({ db, config }: Deps) {
     handler: async ({ res, params }) => {
       const text = await renderFeed(db, config.appUrl, params.token);
       res.setHeader("content-type", "text/calendar; charset=utf-8");
-      res.setHeader("cache-control", "private, max-age=300");
+      // A revoked address must stop at once, also in shared caches between the calendar and us.
+      res.setHeader("cache-control", "no-store");
       res.send(text);
     },
   });

@@ -41,9 +41,8 @@ export async function listFeeds(db: Db, actor: Actor) {
 }
 
 export async function createFeed(db: Db, appUrl: string, actor: Actor, input: { roomId?: number; staffUserId?: string }) {
-  if (actor.role === "engineer" && input.staffUserId !== actor.userId) {
-    throw new HttpError(403, "forbidden", "An engineer can subscribe to their own calendar only");
-  }
+  // Someone else's calendar is a row the engineer may not see: 404, as for every other "own" row.
+  if (actor.role === "engineer" && input.staffUserId !== actor.userId) throw notFound("That engineer");
   if (input.roomId) {
     const [room] = await db.select().from(rooms).where(eq(rooms.id, input.roomId));
     if (!room) throw notFound("That room");
@@ -68,7 +67,10 @@ export async function createFeed(db: Db, appUrl: string, actor: Actor, input: { 
 export async function revokeFeed(db: Db, actor: Actor, id: number) {
   await db.transaction(async (tx) => {
     const [feed] = await tx.select().from(calendarFeedTokens).where(eq(calendarFeedTokens.id, id)).for("update");
-    if (!feed || (actor.role === "engineer" && feed.staffUserId !== actor.userId)) throw notFound("That calendar feed");
+    // A revoked feed is gone: revoking it again finds nothing (no second stamp, no second audit row).
+    if (!feed || feed.revokedAt !== null || (actor.role === "engineer" && feed.staffUserId !== actor.userId)) {
+      throw notFound("That calendar feed");
+    }
     await tx.update(calendarFeedTokens).set({ revokedAt: new Date() }).where(eq(calendarFeedTokens.id, id));
     await writeAudit(tx, actor, "calendar_feed.revoked", { type: "calendar_feed", id }, { before: { revokedAt: null } });
   });

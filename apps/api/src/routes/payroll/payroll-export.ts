@@ -3,6 +3,7 @@ import type { Response } from "express";
 import ExcelJS from "exceljs";
 import { localDateTime, payrollCaution, type EntryTrace } from "@takeup/domain";
 import type { ComputedPeriod } from "./compute-period.ts";
+import { addSafeRow, toCsv } from "../../lib/spreadsheet.ts";
 
 const hours = (minutes: number) => Math.round((minutes / 60) * 100) / 100;
 const dollars = (cents: number) => cents / 100;
@@ -67,13 +68,9 @@ export function summaryRows(c: ComputedPeriod) {
 
 /** A CSV of the summary (RFC 4180: CRLF lines, fields with commas or quotes quoted). */
 export function summaryCsv(c: ComputedPeriod): string {
-  const cell = (v: unknown) => {
-    const text = typeof v === "number" ? String(v) : String(v ?? "");
-    return /[",\r\n]/.test(text) ? `"${text.replace(/"/g, '""')}"` : text;
-  };
   const columns = summaryColumns.filter((col) => col.key !== "totalTime");
   const lines = [columns.map((col) => col.header), ...summaryRows(c).map((row) => columns.map((col) => (col.key.endsWith("Hours") || ["straightTime", "overtimePremium", "doubleTimePremium", "gross"].includes(col.key) ? (row[col.key] as number).toFixed(2) : row[col.key])))];
-  return lines.map((line) => line.map(cell).join(",")).join("\r\n") + "\r\n";
+  return toCsv(lines);
 }
 
 /** Streams the workbook (summary, daily detail, raw entries) straight to the response. */
@@ -95,9 +92,9 @@ export async function writeWorkbook(c: ComputedPeriod, res: Response, timeZone: 
   header.commit();
   summary.columns = summaryColumns.map((col) => ({ key: col.key, width: col.width, style: "numFmt" in col ? { numFmt: col.numFmt } : {} }));
   const rows = summaryRows(c);
-  for (const row of rows) summary.addRow(row).commit();
+  for (const row of rows) addSafeRow(summary, row).commit();
   const total = (k: "regularHours" | "overtimeHours" | "doubleTimeHours" | "totalHours" | "totalTime" | "straightTime" | "overtimePremium" | "doubleTimePremium" | "gross") => rows.reduce((t, r) => t + r[k], 0);
-  const totalRow = summary.addRow({
+  const totalRow = addSafeRow(summary, {
     staffId: "Total",
     regularHours: hours(c.summary.staff.reduce((t, s) => t + s.regularMinutes, 0)),
     overtimeHours: hours(c.summary.staff.reduce((t, s) => t + s.overtimeMinutes, 0)),
@@ -129,7 +126,7 @@ export async function writeWorkbook(c: ComputedPeriod, res: Response, timeZone: 
   for (const s of c.summary.staff) {
     for (const w of c.result.workweeks.filter((w) => w.staffId === s.staffId && s.workweekStarts.includes(w.workweekStart))) {
       for (const d of w.days) {
-        dailyStyled(daily.addRow({ staffId: s.staffId, name: c.names.get(s.staffId) ?? "", workweekStart: w.workweekStart, date: d.workday, worked: hours(d.workedMinutes), regular: hours(d.regularMinutes), overtime: hours(d.overtimeMinutes), doubleTime: hours(d.doubleTimeMinutes) })).commit();
+        dailyStyled(addSafeRow(daily, { staffId: s.staffId, name: c.names.get(s.staffId) ?? "", workweekStart: w.workweekStart, date: d.workday, worked: hours(d.workedMinutes), regular: hours(d.regularMinutes), overtime: hours(d.overtimeMinutes), doubleTime: hours(d.doubleTimeMinutes) })).commit();
       }
     }
   }
@@ -158,7 +155,7 @@ export async function writeWorkbook(c: ComputedPeriod, res: Response, timeZone: 
   const { entries, traces } = exportedEntries(c);
   for (const e of entries) {
     const trace = traces.get(String(e.id));
-    rawStyled(raw.addRow({
+    rawStyled(addSafeRow(raw, {
       id: e.id,
       staffId: e.staffUserId,
       name: e.staffName,

@@ -40,6 +40,8 @@ export async function loadPayroll(db: DbOrTx): Promise<PayrollContext> {
 export async function updatePayrollSettings(db: Db, actor: Actor, input: UpdatePayrollSettingsInput): Promise<PayrollSettingsDto> {
   return db.transaction(async (tx) => {
     const before = (await loadPayroll(tx)).dto;
+    // An empty change is a no-op (drizzle refuses an UPDATE with nothing to set).
+    if (Object.values(input).every((v) => v === undefined)) return before;
     await tx.update(studio).set(input).where(eq(studio.id, 1));
     const after = (await loadPayroll(tx)).dto;
     await writeAudit(tx, actor, "payroll_settings.updated", { type: "studio", id: 1 }, { before, after });

@@ -1,12 +1,14 @@
 import type { Response } from "express";
 import { fromNodeHeaders } from "better-auth/node";
-import { meDto, okDto, passwordResetInput, passwordResetRequestInput, signInInput } from "@takeup/domain";
+import { meDto, okDto, passwordResetInput, passwordResetRequestInput, signInInput, updateMeInput } from "@takeup/domain";
 import { ApiRouter } from "../../lib/api-router.ts";
 import { fromAuthError } from "../../lib/better-auth-errors.ts";
 import type { Actor } from "../../lib/actor.ts";
 import type { Deps } from "../../deps.ts";
 import { HttpError } from "../../lib/http-error.ts";
 import { loadActor } from "../../lib/actor.ts";
+import { updateOwnProfile } from "./profile.service.ts";
+import { afterResponse } from "../../lib/after-response.ts";
 
 export const toMe = (actor: Actor) => ({
   id: actor.userId,
@@ -33,7 +35,7 @@ export function sessionRouter({ db, auth, config, throttle }: Deps) {
       response: meDto,
       handler: async ({ req, res, body }) => {
         const address = req.ip ?? "unknown";
-        throttle.assertAllowed(address, body.email);
+        await throttle.assertSignInAllowed(address, body.email);
         let result;
         try {
           result = await auth.api.signInEmail({
@@ -42,10 +44,10 @@ export function sessionRouter({ db, auth, config, throttle }: Deps) {
             returnHeaders: true,
           });
         } catch (error) {
-          throttle.recordFailure(address, body.email);
+          await throttle.recordSignInFailure(address, body.email);
           fromAuthError(error, { code: "invalid_credentials", message: "That e-mail and password do not match" });
         }
-        throttle.recordSuccess(body.email);
+        await throttle.recordSignInSuccess(address, body.email);
         const actor = await loadActor(db, result.response.user.id);
         if (!actor) throw new HttpError(403, "no_role", "This sign-in has no role at the studio");
         forwardCookies(res, result.headers);
@@ -71,13 +73,21 @@ export function sessionRouter({ db, auth, config, throttle }: Deps) {
     .route({
       method: "post",
       path: "/password-reset-requests",
-      summary: "E-mail a password-reset link (answers the same whether or not the address is known)",
+      summary: "E-mail a password-reset link (answers the same whether or not the address is known; 429 past 10 requests from one address in 15 minutes)",
       access: "public",
       body: passwordResetRequestInput,
       status: 202,
       response: okDto,
-      handler: async ({ body }) => {
-        await auth.api.requestPasswordReset({ body: { email: body.email, redirectTo: `${config.appUrl}/reset-password` } });
+      handler: async ({ req, res, body }) => {
+        // The same work before answering whether or not the address is known: the throttles are
+        // counted per client address and per e-mail address alike. Looking the account up,
+        // writing the token and sending the e-mail happen after the answer has gone (decision 009).
+        await throttle.assertResetRequestAllowed(req.ip ?? "unknown");
+        if (await throttle.takeResetEmail(body.email)) {
+          afterResponse(res, "password reset e-mail", async () => {
+            await auth.api.requestPasswordReset({ body: { email: body.email, redirectTo: `${config.appUrl}/reset-password` } });
+          });
+        }
         return { ok: true };
       },
     })
@@ -99,13 +109,23 @@ export function sessionRouter({ db, auth, config, throttle }: Deps) {
     });
 }
 
-export function meRouter() {
-  return new ApiRouter("/api/me", "Session").route({
-    method: "get",
-    path: "/",
-    summary: "The signed-in user and their role",
-    access: "signed-in",
-    response: meDto,
-    handler: async ({ actor }) => toMe(actor),
-  });
+export function meRouter({ db }: Pick<Deps, "db">) {
+  return new ApiRouter("/api/me", "Session")
+    .route({
+      method: "get",
+      path: "/",
+      summary: "The signed-in user and their role",
+      access: "signed-in",
+      response: meDto,
+      handler: async ({ actor }) => toMe(actor),
+    })
+    .route({
+      method: "patch",
+      path: "/",
+      summary: "Change one's own name (plain text, 1–100 characters; audited)",
+      access: "signed-in",
+      body: updateMeInput,
+      response: meDto,
+      handler: async ({ actor, body }) => toMe(await updateOwnProfile(db, actor, body)),
+    });
 }

@@ -45,13 +45,6 @@ describe("sign-in", () => {
     expect((await agent.get("/api/me")).status).toBe(401);
   });
 
-  it("keeps better-auth's own sign-in and sign-up endpoints closed", async () => {
-    const signIn = await t.client().post("/api/auth/sign-in/email").send({ email: demo.owner, password: "studio-demo-2026" });
-    expect(signIn.status).toBe(404);
-    const signUp = await t.client().post("/api/auth/sign-up/email").send({ email: "x@y.test", password: "long-enough-pw", name: "X" });
-    expect(signUp.status).toBe(404);
-  });
-
   it("refuses a cookie-bearing write from another site", async () => {
     const agent = await t.signIn(demo.owner);
     const response = await agent.patch("/api/studio").set("Origin", "https://evil.test").send({ name: "Hijacked" });

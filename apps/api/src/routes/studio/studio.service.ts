@@ -29,6 +29,8 @@ export async function updateStudio(db: Db, actor: Actor, input: UpdateStudioInpu
       // Kept shortest notice first, the order the fee schedule is read and shown in.
       cancellationTiers: input.cancellationTiers ? [...input.cancellationTiers].sort((a, b) => a.noticeUnderHours - b.noticeUnderHours) : undefined,
     };
+    // An empty change is a no-op (drizzle refuses an UPDATE with nothing to set).
+    if (Object.values(changes).every((v) => v === undefined)) return before;
     await tx.update(studio).set(changes).where(eq(studio.id, 1));
     const after = await loadStudio(tx);
     await writeAudit(tx, actor, "studio.updated", { type: "studio", id: 1 }, { before, after });

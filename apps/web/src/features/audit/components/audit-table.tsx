@@ -3,7 +3,7 @@ import type { AuditEventDto } from "@takeup/domain";
 import { Button } from "../../../components/ui/button.tsx";
 import { DataTable, type ColumnDef } from "../../../components/ui/data-table.tsx";
 import { formatStudioDateTime } from "../../../lib/dates.ts";
-import { describeAction, describeEntity, showJson } from "./describe-event.ts";
+import { describeAction, describeActor, describeEntity, showJson } from "./describe-event.ts";
 
 type AuditTableProps = { events: AuditEventDto[]; timeZone: string };
 
@@ -17,7 +17,7 @@ export function AuditTable({ events, timeZone }: AuditTableProps) {
         sortDescFirst: true,
         cell: ({ row }) => <span className="whitespace-nowrap">{formatStudioDateTime(row.original.at, timeZone)}</span>,
       },
-      { id: "who", header: "Who", accessorFn: (e) => e.actorName ?? "System" },
+      { id: "who", header: "Who", accessorFn: describeActor },
       { id: "action", header: "What", accessorFn: (e) => describeAction(e.action) },
       { id: "entity", header: "Entity", accessorFn: (e) => describeEntity(e.entityType, e.entityId) },
       {

@@ -4,6 +4,16 @@ export function describeAction(action: string): string {
   return words.charAt(0).toUpperCase() + words.slice(1);
 }
 
+/**
+ * Who did it. A client user chooses their own name, so the client account they really belong to
+ * is always shown beside it ("Mara Linden (Owner) · client user of Lantern Static").
+ */
+export function describeActor(event: { actorName: string | null; actorClientAccountName: string | null }): string {
+  if (event.actorName === null) return "System";
+  if (event.actorClientAccountName === null) return event.actorName;
+  return `${event.actorName} · client user of ${event.actorClientAccountName}`;
+}
+
 export function describeEntity(entityType: string, entityId: string): string {
   return `${entityType.replace(/_/g, " ")} ${entityId}`;
 }

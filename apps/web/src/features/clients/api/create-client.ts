@@ -1,9 +1,9 @@
 import { useMutation, useQueryClient } from "@tanstack/react-query";
-import { clientDetailDto, type CreateClientInput } from "@takeup/domain";
-import { api } from "../../../lib/api-client.ts";
+import { clientRoutes, type CreateClientInput } from "@takeup/domain";
+import { callApi } from "../../../lib/api-client.ts";
 import { clientKeys } from "./client-keys.ts";
 
-export const createClient = (input: CreateClientInput) => api.post("/api/clients", input, clientDetailDto);
+export const createClient = (input: CreateClientInput) => callApi(clientRoutes.create, { body: input });
 
 export function useCreateClient() {
   const queryClient = useQueryClient();

@@ -1,10 +1,9 @@
 import { useMutation, useQueryClient } from "@tanstack/react-query";
-import { pendingInvitationDto, type InviteClientUserInput } from "@takeup/domain";
-import { api } from "../../../lib/api-client.ts";
+import { clientRoutes, type InviteClientUserInput } from "@takeup/domain";
+import { callApi } from "../../../lib/api-client.ts";
 import { clientKeys } from "./client-keys.ts";
 
-export const inviteClientUser = (clientId: number, input: InviteClientUserInput) =>
-  api.post(`/api/clients/${clientId}/invitations`, input, pendingInvitationDto);
+export const inviteClientUser = (clientId: number, input: InviteClientUserInput) => callApi(clientRoutes.inviteUser, { params: { id: clientId }, body: input });
 
 export function useInviteClientUser(clientId: number) {
   const queryClient = useQueryClient();

@@ -1,12 +1,12 @@
 import { useMutation, useQueryClient } from "@tanstack/react-query";
-import { clientDetailDto } from "@takeup/domain";
-import { api } from "../../../lib/api-client.ts";
+import { clientRoutes } from "@takeup/domain";
+import { callApi } from "../../../lib/api-client.ts";
 import { clientKeys } from "./client-keys.ts";
 
 type Change = { userId: string; active: boolean };
 
 export const updateClientUser = (clientId: number, { userId, active }: Change) =>
-  api.patch(`/api/clients/${clientId}/users/${encodeURIComponent(userId)}`, { active }, clientDetailDto);
+  callApi(clientRoutes.setUserActive, { params: { id: clientId, userId }, body: { active } });
 
 export function useUpdateClientUser(clientId: number) {
   const queryClient = useQueryClient();

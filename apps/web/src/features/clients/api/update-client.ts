@@ -1,9 +1,9 @@
 import { useMutation, useQueryClient } from "@tanstack/react-query";
-import { clientDetailDto, type UpdateClientInput } from "@takeup/domain";
-import { api } from "../../../lib/api-client.ts";
+import { clientRoutes, type UpdateClientInput } from "@takeup/domain";
+import { callApi } from "../../../lib/api-client.ts";
 import { clientKeys } from "./client-keys.ts";
 
-export const updateClient = (id: number, input: UpdateClientInput) => api.patch(`/api/clients/${id}`, input, clientDetailDto);
+export const updateClient = (id: number, input: UpdateClientInput) => callApi(clientRoutes.update, { params: { id }, body: input });
 
 export function useUpdateClient(id: number) {
   const queryClient = useQueryClient();

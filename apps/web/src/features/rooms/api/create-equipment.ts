@@ -1,9 +1,9 @@
 import { useMutation, useQueryClient } from "@tanstack/react-query";
-import { equipmentDto, type CreateEquipmentInput } from "@takeup/domain";
-import { api } from "../../../lib/api-client.ts";
+import { equipmentRoutes, type CreateEquipmentInput } from "@takeup/domain";
+import { callApi } from "../../../lib/api-client.ts";
 import { roomKeys } from "./room-keys.ts";
 
-export const createEquipment = (input: CreateEquipmentInput) => api.post("/api/equipment", input, equipmentDto);
+export const createEquipment = (input: CreateEquipmentInput) => callApi(equipmentRoutes.create, { body: input });
 
 export function useCreateEquipment() {
   const queryClient = useQueryClient();

@@ -1,10 +1,9 @@
 import { queryOptions, useQuery } from "@tanstack/react-query";
-import { z } from "zod";
-import { equipmentDto } from "@takeup/domain";
-import { api } from "../../../lib/api-client.ts";
+import { equipmentRoutes } from "@takeup/domain";
+import { callApi } from "../../../lib/api-client.ts";
 import { roomKeys } from "./room-keys.ts";
 
-export const getEquipment = (signal?: AbortSignal) => api.get("/api/equipment", z.array(equipmentDto), signal);
+export const getEquipment = (signal?: AbortSignal) => callApi(equipmentRoutes.list, { signal });
 
 export const equipmentQueryOptions = () => queryOptions({ queryKey: roomKeys.equipment(), queryFn: ({ signal }) => getEquipment(signal) });
 

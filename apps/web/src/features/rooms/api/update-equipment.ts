@@ -1,10 +1,10 @@
 import { useMutation, useQueryClient } from "@tanstack/react-query";
-import { equipmentDto, type UpdateEquipmentInput } from "@takeup/domain";
-import { api } from "../../../lib/api-client.ts";
+import { equipmentRoutes, type UpdateEquipmentInput } from "@takeup/domain";
+import { callApi } from "../../../lib/api-client.ts";
 import { roomKeys } from "./room-keys.ts";
 
 /** Moving kit to another room is a change of its home room. */
-export const updateEquipment = (id: number, input: UpdateEquipmentInput) => api.patch(`/api/equipment/${id}`, input, equipmentDto);
+export const updateEquipment = (id: number, input: UpdateEquipmentInput) => callApi(equipmentRoutes.update, { params: { id }, body: input });
 
 export function useUpdateEquipment(id: number) {
   const queryClient = useQueryClient();

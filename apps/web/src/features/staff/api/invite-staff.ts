@@ -1,9 +1,9 @@
 import { useMutation, useQueryClient } from "@tanstack/react-query";
-import { pendingInvitationDto, type InviteStaffInput } from "@takeup/domain";
-import { api } from "../../../lib/api-client.ts";
+import { staffRoutes, type InviteStaffInput } from "@takeup/domain";
+import { callApi } from "../../../lib/api-client.ts";
 import { staffKeys } from "./staff-keys.ts";
 
-export const inviteStaff = (input: InviteStaffInput) => api.post("/api/staff/invitations", input, pendingInvitationDto);
+export const inviteStaff = (input: InviteStaffInput) => callApi(staffRoutes.invite, { body: input });
 
 export function useInviteStaff() {
   const queryClient = useQueryClient();

@@ -1,10 +1,10 @@
 import { useMutation, useQueryClient } from "@tanstack/react-query";
-import { staffMemberDto, type UpdateStaffInput } from "@takeup/domain";
-import { api } from "../../../lib/api-client.ts";
+import { staffRoutes, type UpdateStaffInput } from "@takeup/domain";
+import { callApi } from "../../../lib/api-client.ts";
 import { staffKeys } from "./staff-keys.ts";
 
 export const updateStaff = ({ userId, ...input }: UpdateStaffInput & { userId: string }) =>
-  api.patch(`/api/staff/${encodeURIComponent(userId)}`, input, staffMemberDto);
+  callApi(staffRoutes.update, { params: { userId }, body: input });
 
 export function useUpdateStaff() {
   const queryClient = useQueryClient();

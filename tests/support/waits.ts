@@ -1,0 +1,11 @@
+// How long any test waits for something to appear, in one place. The figures fit a 2-core
+// machine with other CPU-bound work beside the suite (load average 5–8): accepting an invitation
+// hashes a password, a cold page load builds a React tree, and both can take seconds there.
+// Waits end as soon as the awaited state shows, so a generous budget costs nothing when green.
+
+/** Browser journeys: `expect.poll`, Playwright actions, navigations and e-mail arrival. */
+export const browserWaitMs = 20_000;
+/** How often a browser journey re-checks an awaited state. */
+export const browserPollIntervalMs = 100;
+/** Component tests in jsdom: Testing Library's `findBy*` and `waitFor`. */
+export const componentWaitMs = 10_000;
