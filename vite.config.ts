@@ -1,7 +1,7 @@
 import { defineConfig } from "vitest/config";
 import react from "@vitejs/plugin-react";
 import tailwindcss from "@tailwindcss/vite";
-import { browserPollIntervalMs, browserWaitMs } from "./tests/support/waits.ts";
+import { browserPollIntervalMs, browserWaitMs, hookBudgetMs, testBudgetMs } from "./tests/support/waits.ts";
 
 const apiPort = Number(process.env.API_PORT ?? 3000);
 
@@ -25,6 +25,7 @@ export default defineConfig({
           environment: "node",
           include: ["src/**/*.test.ts"],
           setupFiles: ["../../tests/support/fail-on-console-error.ts", "../../tests/support/fast-check-seed.ts"],
+          testTimeout: testBudgetMs.domain,
         },
       },
       {
@@ -35,8 +36,8 @@ export default defineConfig({
           include: ["apps/api/src/**/*.test.ts", "apps/mail-catcher/src/**/*.test.ts", "packages/db/src/**/*.test.ts", "tests/reference/**/*.test.ts"],
           setupFiles: ["tests/support/fail-on-console-error.ts"],
           env: { NODE_ENV: "test" },
-          testTimeout: 30000,
-          hookTimeout: 60000,
+          testTimeout: testBudgetMs.api,
+          hookTimeout: hookBudgetMs,
         },
       },
       {
@@ -49,7 +50,7 @@ export default defineConfig({
           setupFiles: ["./src/test/setup.ts", "../../tests/support/fail-on-console-error.ts"],
           css: false,
           // Typing into forms in jsdom takes seconds on a loaded 2-core machine; 5 s is not enough.
-          testTimeout: 30000,
+          testTimeout: testBudgetMs.web,
         },
       },
       {
@@ -59,8 +60,8 @@ export default defineConfig({
           environment: "node",
           include: ["**/*.spec.ts"],
           setupFiles: ["../support/fail-on-console-error.ts"],
-          testTimeout: 120000,
-          hookTimeout: 60000,
+          testTimeout: testBudgetMs.e2e,
+          hookTimeout: hookBudgetMs,
           fileParallelism: false,
           // Every expect.poll waits as long as a loaded 2-core machine needs (tests/support/waits.ts).
           expect: { poll: { timeout: browserWaitMs, interval: browserPollIntervalMs } },

@@ -9,3 +9,12 @@ export const browserWaitMs = 20_000;
 export const browserPollIntervalMs = 100;
 /** Component tests in jsdom: Testing Library's `findBy*` and `waitFor`. */
 export const componentWaitMs = 10_000;
+
+/**
+ * How long one test may run before Vitest calls it failed, per project. Property tests of the
+ * domain run hundreds of cases and took 5–11 s each beside two CPU burners and other builds
+ * (Vitest's default of 5 s failed 12 of them), so every project gets a budget sized for that.
+ */
+export const testBudgetMs = { domain: 60_000, api: 60_000, web: 30_000, e2e: 120_000 } as const;
+/** How long a project's beforeAll/afterAll may take (a fresh database, migrated and seeded). */
+export const hookBudgetMs = 120_000;
