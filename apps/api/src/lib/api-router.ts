@@ -6,7 +6,6 @@ import type { Actor } from "./actor.ts";
 import { HttpError, type ErrorDetail } from "./http-error.ts";
 import type { SessionReader } from "./session.ts";
 
-type Method = RouteContract["method"];
 type Schema = z.ZodType;
 type Parsed<S> = S extends z.ZodType ? z.output<S> : undefined;
 
@@ -19,22 +18,14 @@ export type RouteContext<P, Q, B, A extends Access> = {
   body: Parsed<B>;
 };
 
-export type RouteSpec<P = undefined, Q = undefined, B = undefined, A extends Access = Access> = {
-  method: Method;
+/** A contract as mounted: its path relative to the router's base, and the handler behind it. */
+type MountedRoute = Omit<RouteContract, "path"> & {
   /** Relative to the router's base, in Express syntax (`/:id`). */
   path: string;
-  summary: string;
-  access: A;
-  params?: P;
-  query?: Q;
-  body?: B;
-  /** Documents the success body; `file` means the handler streams a download itself. */
-  response?: Schema | "file";
-  status?: number;
-  handler: (ctx: RouteContext<P, Q, B, A>) => Promise<unknown>;
+  handler: (ctx: RouteContext<Schema | undefined, Schema | undefined, Schema | undefined, Access>) => Promise<unknown>;
 };
 
-export type RegisteredRoute = RouteSpec<Schema | undefined, Schema | undefined, Schema | undefined, Access> & {
+export type RegisteredRoute = MountedRoute & {
   fullPath: string;
   tag: string;
 };
@@ -48,8 +39,8 @@ export type ToExpressOptions = {
 };
 
 /**
- * The one way to declare an API route: it mounts the handler behind requireRole and the zod
- * contracts, and records the route so the OpenAPI document and the access tests see it.
+ * Mounts the routes declared in `@takeup/domain`'s contracts behind requireRole and their zod
+ * schemas, and records each so the OpenAPI document and the access tests see it.
  */
 export class ApiRouter {
   readonly routes: RegisteredRoute[] = [];
@@ -58,13 +49,6 @@ export class ApiRouter {
     readonly base: string,
     readonly tag: string,
   ) {}
-
-  route<P extends Schema | undefined = undefined, Q extends Schema | undefined = undefined, B extends Schema | undefined = undefined, A extends Access = Access>(
-    spec: RouteSpec<P, Q, B, A>,
-  ): this {
-    this.routes.push({ ...(spec as unknown as RouteSpec<Schema, Schema, Schema, Access>), fullPath: this.base + spec.path, tag: this.tag });
-    return this;
-  }
 
   /** Mounts a route declared once in `@takeup/domain`'s contracts, which the web's fetchers share. */
   handle<const C extends RouteContract>(contract: C, handler: (ctx: ContractContext<C>) => Promise<ContractAnswer<C>>): this {

@@ -1,10 +1,12 @@
+import type { ApiErrorCode } from "@takeup/domain";
+
 export type ErrorDetail = { field: string; rule: string; message: string };
 
 /** An error meant for the client: services throw it, the error handler renders it. */
 export class HttpError extends Error {
   constructor(
     readonly status: number,
-    readonly code: string,
+    readonly code: ApiErrorCode,
     message: string,
     readonly details?: ErrorDetail[],
   ) {
@@ -14,4 +16,4 @@ export class HttpError extends Error {
 }
 
 export const notFound = (what: string) => new HttpError(404, "not_found", `${what} was not found`);
-export const conflict = (code: string, message: string) => new HttpError(409, code, message);
+export const conflict = (code: ApiErrorCode, message: string) => new HttpError(409, code, message);

@@ -1,5 +1,6 @@
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { createTestApp, type TestApp } from "../test/harness.ts";
+import { apiErrorCodes } from "@takeup/domain";
 import type { RegisteredRoute } from "../lib/api-router.ts";
 
 let t: TestApp;
@@ -39,6 +40,14 @@ describe("GET /api/openapi.json", () => {
     expect(error.required).toEqual(["error"]);
     expect(error.properties.error.required).toEqual(expect.arrayContaining(["code", "message"]));
     expect(error.properties.error.properties.details.items.required).toEqual(expect.arrayContaining(["field", "rule", "message"]));
+  });
+
+  it("lists every error code the API may answer with, from the one union HttpError accepts", async () => {
+    const doc = (await t.client().get("/api/openapi.json")).body;
+    const code = doc.components.schemas.Error.properties.error.properties.code;
+    expect(code.type).toBe("string");
+    expect(code.enum).toEqual([...apiErrorCodes]);
+    expect(code.enum).toEqual(expect.arrayContaining(["invalid_input", "booking_conflict", "contract_drift", "too_many_attempts"]));
   });
 
   it("describes request bodies from the zod contracts, with their limits", async () => {

@@ -1,6 +1,7 @@
 import { describe, expect, it, vi } from "vitest";
 import { z } from "zod";
-import { api, ApiError } from "./api-client.ts";
+import { clientRoutes, defineRoute, meRoutes, staffRoutes, studioRoutes } from "@takeup/domain";
+import { ApiError, callApi } from "./api-client.ts";
 import { mockApi } from "../test/mock-api.ts";
 
 describe("api client", () => {
@@ -22,7 +23,7 @@ describe("api client", () => {
       },
     ]);
 
-    const failure = await api.post("/api/staff/invitations", { email: "nope" }).catch((error: unknown) => error);
+    const failure = await callApi(staffRoutes.invite, { body: { name: "Ada", email: "nope", role: "engineer" } }).catch((error: unknown) => error);
 
     expect(failure).toBeInstanceOf(ApiError);
     expect(failure).toMatchObject({
@@ -36,7 +37,16 @@ describe("api client", () => {
   it("sends JSON with the session cookie of our own origin", async () => {
     const { calls, fetchMock } = mockApi([{ method: "PATCH", path: "/api/studio", reply: { body: { ok: true } } }]);
 
-    await api.patch("/api/studio", { name: "Wrenfield Sound" });
+    const rename = defineRoute({
+      method: "patch",
+      path: "/api/studio",
+      summary: "A route declared for this test",
+      access: ["owner"],
+      body: z.object({ name: z.string() }),
+      response: z.object({ ok: z.literal(true) }),
+    });
+
+    await expect(callApi(rename, { body: { name: "Wrenfield Sound" } })).resolves.toEqual({ ok: true });
 
     expect(calls).toEqual([{ method: "PATCH", path: "/api/studio", body: { name: "Wrenfield Sound" }, credentials: "same-origin" }]);
     const init = fetchMock.mock.calls[0]?.[1];
@@ -46,18 +56,18 @@ describe("api client", () => {
   it("reports an unreachable server as a network error, not a crash", async () => {
     vi.stubGlobal("fetch", vi.fn(() => Promise.reject(new TypeError("Failed to fetch"))));
 
-    await expect(api.get("/api/me")).rejects.toMatchObject({ status: 0, code: "network_error" });
+    await expect(callApi(meRoutes.get)).rejects.toMatchObject({ status: 0, code: "network_error" });
   });
 
   it("refuses an answer that does not match the shared contract", async () => {
     mockApi([{ method: "GET", path: "/api/studio", reply: { body: { name: 42 } } }]);
 
-    await expect(api.get("/api/studio", z.object({ name: z.string() }))).rejects.toMatchObject({ code: "unexpected_response" });
+    await expect(callApi(studioRoutes.get)).rejects.toMatchObject({ code: "unexpected_response" });
   });
 
   it("gives a readable error when the server answers with something that is not our error shape", async () => {
     vi.stubGlobal("fetch", vi.fn(async () => new Response("<html>Bad gateway</html>", { status: 502 })));
 
-    await expect(api.get("/api/clients")).rejects.toMatchObject({ status: 502, code: "unexpected_response" });
+    await expect(callApi(clientRoutes.list)).rejects.toMatchObject({ status: 502, code: "unexpected_response" });
   });
 });

@@ -46,6 +46,11 @@ async function readJson(response: Response): Promise<unknown> {
   }
 }
 
+/** The ApiError a failed response stands for (our error shape, or a readable stand-in). */
+export async function apiErrorOf(response: Response): Promise<ApiError> {
+  return toApiError(response.status, await readJson(response));
+}
+
 function toApiError(status: number, body: unknown): ApiError {
   const parsed = apiErrorDto.safeParse(body);
   if (parsed.success) {
@@ -55,7 +60,7 @@ function toApiError(status: number, body: unknown): ApiError {
   return new ApiError(status, "unexpected_response", `The server answered with an error (${status}). Try again in a moment.`);
 }
 
-export async function apiRequest<T = unknown>(path: string, options: RequestOptions<T> = {}): Promise<T> {
+async function apiRequest<T = unknown>(path: string, options: RequestOptions<T> = {}): Promise<T> {
   const { method = "GET", body, schema, signal } = options;
   const headers: Record<string, string> = { accept: "application/json" };
   if (body !== undefined) headers["content-type"] = "application/json";
@@ -84,13 +89,6 @@ export async function apiRequest<T = unknown>(path: string, options: RequestOpti
   }
   return parsed.data;
 }
-
-export const api = {
-  get: <T>(path: string, schema?: z.ZodType<T>, signal?: AbortSignal) => apiRequest<T>(path, { schema, signal }),
-  post: <T>(path: string, body: unknown, schema?: z.ZodType<T>) => apiRequest<T>(path, { method: "POST", body, schema }),
-  patch: <T>(path: string, body: unknown, schema?: z.ZodType<T>) => apiRequest<T>(path, { method: "PATCH", body, schema }),
-  delete: <T>(path: string, schema?: z.ZodType<T>) => apiRequest<T>(path, { method: "DELETE", schema }),
-};
 
 type CallOptions<C extends RouteContract> = RouteInput<C> & { signal?: AbortSignal };
 type CallArgs<C extends RouteContract> = object extends RouteInput<C> ? [options?: CallOptions<C>] : [options: CallOptions<C>];

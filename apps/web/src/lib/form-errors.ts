@@ -5,6 +5,8 @@ type Options<T extends FieldValues> = {
   fields: readonly Path<T>[];
   /** Errors without details that still clearly belong to one field, e.g. email_taken → email. */
   codeFields?: Partial<Record<string, Path<T>>>;
+  /** The form's name for a field the API names otherwise (hourlyRateCents → rate); others keep their name. */
+  fromApiField?: (apiField: string) => string;
 };
 
 /**
@@ -14,7 +16,7 @@ type Options<T extends FieldValues> = {
 export function applyApiErrors<T extends FieldValues>(
   error: unknown,
   setError: UseFormSetError<T>,
-  { fields, codeFields = {} }: Options<T>,
+  { fields, codeFields = {}, fromApiField = (field) => field }: Options<T>,
 ): string | null {
   if (!(error instanceof ApiError)) return errorMessage(error);
   const known = new Set<string>(fields);
@@ -22,8 +24,9 @@ export function applyApiErrors<T extends FieldValues>(
   const isKnown = (field: string) => known.has(field) || known.has(field.split(".")[0] ?? "");
   let placed = 0;
   for (const detail of error.details) {
-    if (!isKnown(detail.field)) continue;
-    setError(detail.field as Path<T>, { type: "server", message: detail.message });
+    const field = fromApiField(detail.field);
+    if (!isKnown(field)) continue;
+    setError(field as Path<T>, { type: "server", message: detail.message });
     placed += 1;
   }
   const codeField = codeFields[error.code];

@@ -22,8 +22,8 @@ export const percentToBp = (percent: number) => Math.round(percent * 100);
 /** 1250 basis points → 12.5 (percent). */
 export const bpToPercent = (bp: number) => bp / 100;
 
-/** "12.5%" */
-export const formatPercent = (bp: number) => `${new Intl.NumberFormat("en-US", { maximumFractionDigits: 2 }).format(bp / 100)}%`;
+/** "12.5%": the domain's one wording of basis points. */
+export { formatPercent } from "@takeup/domain";
 
 /** 150 minutes → "2.5 h"; 600 → "10 h". */
 export const formatHours = (minutes: number) => `${new Intl.NumberFormat("en-US", { maximumFractionDigits: 2 }).format(minutes / 60)} h`;

@@ -2,7 +2,7 @@
 // Invented demo data; prices are the product brief's demo values.
 import { eq } from "drizzle-orm";
 import { DateTime } from "luxon";
-import { lockoutSpan, quote, rateCardFromVersion, type EngineerRates } from "@takeup/domain";
+import { basisPointsOf, lockoutSpan, quote, rateCardFromVersion, type EngineerRates } from "@takeup/domain";
 import type { Tx } from "../client.ts";
 import {
   bookingEngineers,
@@ -138,12 +138,12 @@ export async function seedStudioFloor(tx: Tx, now = new Date()) {
         rateCardVersionId: version.id,
         quote: priced,
         quoteTotalCents: priced.totalCents,
-        depositRequiredCents: Math.floor((priced.totalCents * 3000 + 5000) / 10000),
+        depositRequiredCents: basisPointsOf(priced.totalCents, 3000),
         depositReceivedAt: p.status === "confirmed" || p.status === "wrapped" ? now : null,
         title: p.title ?? null,
         cancelledAt: p.status === "cancelled" ? now : null,
         cancellationReason: p.status === "cancelled" ? "Singer unwell" : null,
-        cancellationFeeCents: p.status === "cancelled" ? Math.floor((priced.totalCents * 2500 + 5000) / 10000) : null,
+        cancellationFeeCents: p.status === "cancelled" ? basisPointsOf(priced.totalCents, 2500) : null,
         createdByUserId: manager?.id ?? null,
       })
       .$returningId();

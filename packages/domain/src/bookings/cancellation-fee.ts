@@ -1,3 +1,6 @@
+import { formatPercent } from "../shared/format-units.ts";
+import { basisPointsOf } from "../shared/money.ts";
+
 /**
  * A cancellation tier: cancelling with less than `noticeUnderHours` of notice costs `feeBp`
  * basis points of the quoted price. The owner sets the tiers; the shortest matching one wins.
@@ -6,8 +9,6 @@ export type CancellationTier = { noticeUnderHours: number; feeBp: number };
 
 export type CancellationFee = { feeCents: number; noticeMinutes: number; tier: CancellationTier | null; explanation: string };
 
-/** Rounds half up to whole cents. */
-const percentOf = (amountCents: number, bp: number) => Math.floor((amountCents * bp + 5000) / 10000);
 
 export function cancellationFee(input: {
   quoteTotalCents: number;
@@ -20,10 +21,10 @@ export function cancellationFee(input: {
     [...input.tiers]
       .sort((a, b) => a.noticeUnderHours - b.noticeUnderHours)
       .find((t) => noticeMinutes < t.noticeUnderHours * 60) ?? null;
-  const feeCents = tier ? percentOf(input.quoteTotalCents, tier.feeBp) : 0;
+  const feeCents = tier ? basisPointsOf(input.quoteTotalCents, tier.feeBp) : 0;
   const noticeText = noticeMinutes <= 0 ? "after the start" : `${Math.floor(noticeMinutes / 60)} h ${noticeMinutes % 60} min before the start`;
   const explanation = tier
-    ? `Cancelled ${noticeText}: under ${tier.noticeUnderHours} h notice costs ${tier.feeBp / 100}% of the quoted price.`
+    ? `Cancelled ${noticeText}: under ${tier.noticeUnderHours} h notice costs ${formatPercent(tier.feeBp)} of the quoted price.`
     : `Cancelled ${noticeText}: enough notice, no fee.`;
   return { feeCents, noticeMinutes, tier, explanation };
 }

@@ -1,7 +1,8 @@
 import { z } from "zod";
 import { bookingActions, bookingStatuses } from "../bookings/status.ts";
 import { engineerGrades, roomColours } from "../rooms/catalogue.ts";
-import { optionalText } from "./common.ts";
+import { idParams, optionalText } from "./common.ts";
+import { defineRoute } from "./route.ts";
 
 const instant = z.iso.datetime({ offset: true, message: "Use an ISO date and time with an offset, e.g. 2026-12-07T10:00:00-06:00" });
 const engineerIds = z.array(z.string().min(1).max(36)).max(6, "At most six engineers on one booking");
@@ -182,3 +183,112 @@ export type CalendarFeedDto = z.infer<typeof calendarFeedDto>;
 export const createCalendarFeedInput = z
   .strictObject({ roomId: z.number().int().positive().optional(), staffUserId: z.string().min(1).max(36).optional() })
   .refine((v) => (v.roomId === undefined) !== (v.staffUserId === undefined), { message: "Give either a room or an engineer" });
+
+const bookers = ["owner", "manager"] as const;
+const everyoneWhoSeesBookings = ["owner", "manager", "bookkeeper", "engineer", "client"] as const;
+const whoRunsSessions = ["owner", "manager", "engineer"] as const;
+
+/** Quotes, client requests and bookings, declared once for the API and the web. */
+export const bookingRoutes = {
+  quote: defineRoute({
+    method: "post",
+    path: "/api/quotes",
+    summary: "Price a booking and list what is in the way; nothing is stored",
+    access: ["owner", "manager", "client"],
+    body: quoteInput,
+    response: quoteResultDto,
+  }),
+  request: defineRoute({
+    method: "post",
+    path: "/api/booking-requests",
+    summary: "A client asks for a session: it arrives as a hold for the studio manager",
+    access: ["client"],
+    body: bookingRequestInput,
+    status: 201,
+    response: bookingDto,
+  }),
+  list: defineRoute({
+    method: "get",
+    path: "/api/bookings",
+    summary: "Bookings overlapping a window (at most 62 days); engineers see their own, clients their account's",
+    access: everyoneWhoSeesBookings,
+    query: bookingsQuery,
+    response: z.array(bookingDto),
+  }),
+  create: defineRoute({
+    method: "post",
+    path: "/api/bookings",
+    summary: "Pencil a hold or book outright (409 booking_conflict when anything clashes)",
+    access: bookers,
+    body: createBookingInput,
+    status: 201,
+    response: bookingDto,
+  }),
+  get: defineRoute({
+    method: "get",
+    path: "/api/bookings/:id",
+    summary: "One booking with its quote",
+    access: everyoneWhoSeesBookings,
+    params: idParams,
+    response: bookingDto,
+  }),
+  update: defineRoute({
+    method: "patch",
+    path: "/api/bookings/:id",
+    summary: "Move a booking or change its engineers and equipment (priced on its own rate-card version)",
+    access: bookers,
+    params: idParams,
+    body: updateBookingInput,
+    response: bookingDto,
+  }),
+  confirm: defineRoute({
+    method: "post",
+    path: "/api/bookings/:id/confirm",
+    summary: "Confirm a hold (against its deposit); second holds behind it are dropped",
+    access: bookers,
+    params: idParams,
+    body: confirmBookingInput,
+    response: bookingDto,
+  }),
+  cancellationPreview: defineRoute({
+    method: "get",
+    path: "/api/bookings/:id/cancellation-preview",
+    summary: "The fee cancelling now would cost, by notice given",
+    access: bookers,
+    params: idParams,
+    response: cancellationPreviewDto,
+  }),
+  cancel: defineRoute({
+    method: "post",
+    path: "/api/bookings/:id/cancel",
+    summary: "Cancel a confirmed booking, charging the fee for the notice given",
+    access: bookers,
+    params: idParams,
+    body: cancelBookingInput,
+    response: bookingDto,
+  }),
+  start: defineRoute({
+    method: "post",
+    path: "/api/bookings/:id/start",
+    summary: "The session has begun",
+    access: whoRunsSessions,
+    params: idParams,
+    response: bookingDto,
+  }),
+  wrap: defineRoute({
+    method: "post",
+    path: "/api/bookings/:id/wrap",
+    summary: "The session is over (wrapped)",
+    access: whoRunsSessions,
+    params: idParams,
+    response: bookingDto,
+  }),
+  release: defineRoute({
+    method: "post",
+    path: "/api/bookings/:id/release",
+    summary: "Release a hold; the next second hold moves up",
+    access: bookers,
+    params: idParams,
+    response: bookingDto,
+  }),
+};

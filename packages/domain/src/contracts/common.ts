@@ -1,9 +1,11 @@
 import { z } from "zod";
+import { apiErrorCodes } from "./errors.ts";
 
 /** The one shape of every error the API returns. */
 export const apiErrorDto = z.object({
   error: z.object({
-    code: z.string(),
+    // Parsed as any string (an older web app must still show a newer server's message), documented as the list.
+    code: z.string().meta({ description: "What went wrong, one of the API's error codes", enum: [...apiErrorCodes] }),
     message: z.string(),
     details: z
       .array(z.object({ field: z.string(), rule: z.string(), message: z.string() }))

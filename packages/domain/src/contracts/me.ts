@@ -1,5 +1,6 @@
 import { z } from "zod";
 import { roles } from "../auth/roles.ts";
+import { defineRoute } from "./route.ts";
 
 export const meDto = z.object({
   id: z.string(),
@@ -25,3 +26,16 @@ export const profileName = z
 
 export const updateMeInput = z.strictObject({ name: profileName });
 export type UpdateMeInput = z.infer<typeof updateMeInput>;
+
+/** The signed-in person's own record. */
+export const meRoutes = {
+  get: defineRoute({ method: "get", path: "/api/me", summary: "The signed-in user and their role", access: "signed-in", response: meDto }),
+  update: defineRoute({
+    method: "patch",
+    path: "/api/me",
+    summary: "Change one's own name (plain text, 1–100 characters; audited)",
+    access: "signed-in",
+    body: updateMeInput,
+    response: meDto,
+  }),
+};

@@ -214,3 +214,39 @@ export const roomRoutes = {
     response: rateCardVersionDto,
   }),
 };
+
+/** Engineer rates billed to clients, and the engineers who can be booked. */
+export const engineerRateRoutes = {
+  list: defineRoute({
+    method: "get",
+    path: "/api/engineer-rates",
+    summary: "Engineer rates billed to clients (per grade or per engineer), newest first",
+    access: ["owner", "manager", "bookkeeper"],
+    response: z.array(engineerRateDto),
+  }),
+  create: defineRoute({
+    method: "post",
+    path: "/api/engineer-rates",
+    summary: "Set a new engineer rate from a date; earlier bookings keep their quotes",
+    access: ["owner"],
+    body: createEngineerRateInput,
+    status: 201,
+    response: engineerRateDto,
+  }),
+  correct: defineRoute({
+    method: "patch",
+    path: "/api/engineer-rates/:id",
+    summary: "Correct an engineer rate's amount or start, with a reason (audited); bookings already quoted keep their quotes",
+    access: ["owner"],
+    params: idParams,
+    body: correctEngineerRateInput,
+    response: engineerRateDto,
+  }),
+  engineers: defineRoute({
+    method: "get",
+    path: "/api/engineers",
+    summary: "Active engineers who can be assigned to bookings, with their grade",
+    access: ["owner", "manager"],
+    response: z.array(engineerDto),
+  }),
+};

@@ -1,5 +1,7 @@
 import { z } from "zod";
-import { emailAddress, password } from "./common.ts";
+import { emailAddress, okDto, password } from "./common.ts";
+import { meDto } from "./me.ts";
+import { defineRoute } from "./route.ts";
 
 export const signInInput = z.strictObject({
   email: emailAddress,
@@ -15,3 +17,33 @@ export const passwordResetInput = z.strictObject({
   password,
 });
 export type PasswordResetInput = z.infer<typeof passwordResetInput>;
+
+/** Sign-in, sign-out and password reset, in front of better-auth (decision 008). */
+export const sessionRoutes = {
+  signIn: defineRoute({
+    method: "post",
+    path: "/api/session",
+    summary: "Sign in with e-mail and password (429 after repeated failures)",
+    access: "public",
+    body: signInInput,
+    response: meDto,
+  }),
+  signOut: defineRoute({ method: "delete", path: "/api/session", summary: "Sign out", access: "public", response: okDto }),
+  requestPasswordReset: defineRoute({
+    method: "post",
+    path: "/api/session/password-reset-requests",
+    summary: "E-mail a password-reset link (answers the same whether or not the address is known; 429 past 10 requests from one address in 15 minutes)",
+    access: "public",
+    body: passwordResetRequestInput,
+    status: 202,
+    response: okDto,
+  }),
+  resetPassword: defineRoute({
+    method: "post",
+    path: "/api/session/password-resets",
+    summary: "Set a new password with the token from a reset e-mail",
+    access: "public",
+    body: passwordResetInput,
+    response: okDto,
+  }),
+};

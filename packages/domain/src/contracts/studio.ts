@@ -2,6 +2,7 @@ import { z } from "zod";
 import { isValidTimeZone } from "../shared/time-zone.ts";
 import { supportedCurrencies } from "../shared/currency.ts";
 import { optionalEmail, optionalText } from "./common.ts";
+import { defineRoute } from "./route.ts";
 
 export const studioDto = z.object({
   name: z.string(),
@@ -41,3 +42,9 @@ export const updateStudioInput = z.strictObject({
     .optional(),
 });
 export type UpdateStudioInput = z.infer<typeof updateStudioInput>;
+
+/** The studio's own settings. */
+export const studioRoutes = {
+  get: defineRoute({ method: "get", path: "/api/studio", summary: "The studio's name, time zone, currency and workweek", access: "signed-in", response: studioDto }),
+  update: defineRoute({ method: "patch", path: "/api/studio", summary: "Change the studio's settings", access: ["owner"], body: updateStudioInput, response: studioDto }),
+};

@@ -1,4 +1,4 @@
-import { divideRoundHalfUp } from "./cents-math.ts";
+import { roundHalfUpDiv } from "../shared/money.ts";
 import type { PayPeriod } from "./pay-periods.ts";
 import { addDays } from "./studio-calendar.ts";
 import type { Allocation, WorkweekPay } from "./types.ts";
@@ -65,7 +65,7 @@ function straightTime(allocations: readonly Allocation[]): number {
     line.minutes += a.minutes;
     minutesByRate.set(key, line);
   }
-  return [...minutesByRate.values()].reduce((sum, l) => sum + divideRoundHalfUp(BigInt(l.minutes) * BigInt(l.centsPerHour), 60n), 0);
+  return [...minutesByRate.values()].reduce((sum, l) => sum + roundHalfUpDiv(BigInt(l.minutes) * BigInt(l.centsPerHour), 60n), 0);
 }
 
 const minutesOf = (allocations: readonly Allocation[], category?: Allocation["category"]) =>

@@ -1,4 +1,4 @@
-import { divideRoundHalfUp } from "./cents-math.ts";
+import { roundHalfUpDiv } from "../shared/money.ts";
 import type { Allocation, RateLine, RegularRate, WorkdayTotals } from "./types.ts";
 
 function unique(values: readonly string[]): string[] {
@@ -44,7 +44,7 @@ export function rateLines(allocations: readonly Allocation[]): RateLine[] {
       rateCode: first?.rateCode ?? "",
       centsPerHour,
       minutes,
-      straightTimeCents: divideRoundHalfUp(BigInt(minutes) * BigInt(centsPerHour), 60n),
+      straightTimeCents: roundHalfUpDiv(BigInt(minutes) * BigInt(centsPerHour), 60n),
       entryIds: unique(ofRate.map((a) => a.entryId)),
     };
   });
@@ -75,7 +75,7 @@ export function premiums(input: {
   const totalCents = input.straightTimeCents + input.bonusCents;
   const total = BigInt(totalCents);
   const worked = BigInt(workedMinutes);
-  const roundedRate = divideRoundHalfUp(total * 60n, worked);
+  const roundedRate = roundHalfUpDiv(total * 60n, worked);
   const regularRate: RegularRate = {
     totalCents,
     workedMinutes,
@@ -87,14 +87,14 @@ export function premiums(input: {
     const rate = BigInt(roundedRate);
     return {
       regularRate,
-      overtimePremiumCents: divideRoundHalfUp(rate * BigInt(overtimeMinutes), 120n),
-      doubleTimePremiumCents: divideRoundHalfUp(rate * BigInt(doubleTimeMinutes), 60n),
+      overtimePremiumCents: roundHalfUpDiv(rate * BigInt(overtimeMinutes), 120n),
+      doubleTimePremiumCents: roundHalfUpDiv(rate * BigInt(doubleTimeMinutes), 60n),
     };
   }
   // rate × minutes ÷ 60 with rate = total × 60 ÷ worked: the sixties cancel, nothing rounds early.
   return {
     regularRate,
-    overtimePremiumCents: divideRoundHalfUp(total * BigInt(overtimeMinutes), 2n * worked),
-    doubleTimePremiumCents: divideRoundHalfUp(total * BigInt(doubleTimeMinutes), worked),
+    overtimePremiumCents: roundHalfUpDiv(total * BigInt(overtimeMinutes), 2n * worked),
+    doubleTimePremiumCents: roundHalfUpDiv(total * BigInt(doubleTimeMinutes), worked),
   };
 }

@@ -1,7 +1,8 @@
 import type { BillableTime } from "./billable-time.ts";
 import { centsForMinutes } from "./money-math.ts";
 import type { AssignedEngineer, QuoteLine, RateCard } from "./types.ts";
-import { formatDuration, formatRate } from "./wording.ts";
+import { formatDuration } from "../shared/format-units.ts";
+import { formatRate } from "./wording.ts";
 
 const gradeNames = { engineer: "engineer", assistant: "assistant engineer" } as const;
 

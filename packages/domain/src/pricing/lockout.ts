@@ -2,11 +2,12 @@ import { formatMoney } from "../shared/currency.ts";
 import { localAt, nextDayStart } from "../shared/wall-clock.ts";
 import { billableTime } from "./billable-time.ts";
 import { engineerLines } from "./engineer-charges.ts";
-import { roundHalfUpDiv, product } from "./money-math.ts";
+import { product, roundHalfUpDiv } from "../shared/money.ts";
 import { roomLines } from "./room-charges.ts";
 import type { StudioDay } from "./studio-calendar.ts";
 import type { AssignedEngineer, QuoteLine, RateCard } from "./types.ts";
-import { dayLabel, formatDuration, formatPercent } from "./wording.ts";
+import { formatDuration, formatPercent } from "../shared/format-units.ts";
+import { dayLabel } from "./wording.ts";
 
 /**
  * Lockouts: the room is one client's around the clock, for whole studio days (local days in

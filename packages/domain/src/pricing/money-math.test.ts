@@ -1,5 +1,6 @@
 import { describe, expect, it } from "vitest";
-import { centsForMinutes, premiumCentsForMinutes, roundHalfUpDiv, roundRunningTotal } from "./money-math.ts";
+import { roundHalfUpDiv } from "../shared/money.ts";
+import { centsForMinutes, premiumCentsForMinutes, roundRunningTotal } from "./money-math.ts";
 
 describe("money arithmetic", () => {
   it("rounds half a cent up and anything less down ([P] common practice: round half up, per line)", () => {

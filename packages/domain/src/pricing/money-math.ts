@@ -1,24 +1,8 @@
 /**
- * Exact integer arithmetic for money. Products of minutes, rates and basis points can pass
- * 2^53 on long bookings at high rates, so they are formed in BigInt and only the rounded
- * result comes back as a number.
+ * Pricing's sums over the shared exact arithmetic (`shared/money.ts`): per-minute charges,
+ * premiums and running totals that add up.
  */
-
-/** numerator ÷ divisor, rounded half up (both non-negative integers, divisor above zero). */
-export function roundHalfUpDiv(numerator: bigint, divisor: bigint): number {
-  if (numerator < 0n || divisor <= 0n) throw new RangeError("roundHalfUpDiv takes a non-negative numerator and a positive divisor");
-  const rounded = (2n * numerator + divisor) / (2n * divisor);
-  const result = Number(rounded);
-  if (!Number.isSafeInteger(result)) throw new RangeError("Amount is too large to represent exactly");
-  return result;
-}
-
-export function product(...factors: number[]): bigint {
-  return factors.reduce((acc, factor) => {
-    if (!Number.isSafeInteger(factor)) throw new RangeError(`Not an integer: ${factor}`);
-    return acc * BigInt(factor);
-  }, 1n);
-}
+import { product, roundHalfUpDiv } from "../shared/money.ts";
 
 /**
  * Rounds a run of exact amounts (numerators over one divisor) so the rounded parts add up to

@@ -1,7 +1,9 @@
 import type { CalendarPiece, StudioDay } from "./studio-calendar.ts";
-import { premiumCentsForMinutes, roundHalfUpDiv, product } from "./money-math.ts";
+import { product, roundHalfUpDiv } from "../shared/money.ts";
+import { premiumCentsForMinutes } from "./money-math.ts";
 import type { QuoteLine, QuoteLineKind, RateCard } from "./types.ts";
-import { describeSpans, formatDuration, formatPercent, formatRate, formatWindow } from "./wording.ts";
+import { formatDuration, formatPercent } from "../shared/format-units.ts";
+import { describeSpans, formatRate, formatWindow } from "./wording.ts";
 
 interface Pricing {
   card: RateCard;

@@ -2,8 +2,8 @@
 export type PricingProblemCode =
   | "invalid_instant"
   | "not_whole_minutes"
-  | "ends_before_start"
-  | "booking_too_long"
+  | "after_start"
+  | "max_length"
   | "duplicate_engineer"
   | "invalid_engineer_rate"
   | "invalid_rate_card"

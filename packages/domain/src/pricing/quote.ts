@@ -67,7 +67,7 @@ function lockoutQuote(rateCard: RateCard, booking: Booking, studio: Studio): Quo
   const span = lockoutSpan(booking.startsAt, booking.endsAt, timeZone);
   const elapsedMinutes = (span.endsAt.getTime() - span.startsAt.getTime()) / 60_000;
   if (elapsedMinutes > maxBookingMinutes) {
-    throw new PricingError([{ code: "booking_too_long", field: "endsAt", message: `A lockout can last at most ${maxBookingMinutes / 1440} studio days.` }]);
+    throw new PricingError([{ code: "max_length", field: "endsAt", message: `A lockout can last at most ${maxBookingMinutes / 1440} studio days.` }]);
   }
   const days = studioDays(span.startsAt.getTime(), span.endsAt.getTime(), rateCard.afterHours, timeZone);
   const lines = lockoutLines(days, booking.engineers, { card: rateCard, currency, timeZone });

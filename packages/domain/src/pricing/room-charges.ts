@@ -1,9 +1,11 @@
 import { formatMoney } from "../shared/currency.ts";
 import type { BillableTime } from "./billable-time.ts";
-import { centsForMinutes, product, roundRunningTotal } from "./money-math.ts";
+import { product } from "../shared/money.ts";
+import { centsForMinutes, roundRunningTotal } from "./money-math.ts";
 import type { StudioDay } from "./studio-calendar.ts";
 import type { QuoteLine, RateCard } from "./types.ts";
-import { clockChangeNote, dayLabel, formatDuration, formatRate } from "./wording.ts";
+import { formatDuration } from "../shared/format-units.ts";
+import { clockChangeNote, dayLabel, formatRate } from "./wording.ts";
 
 /** A room line before its amount is known: hourly lines are rounded together at the end. */
 type DraftLine = Omit<QuoteLine, "amountCents"> & { hourlyMinutes?: number };

@@ -12,8 +12,8 @@ describe("validating a booking", () => {
   });
 
   it("refuses a booking that ends when it starts or before", () => {
-    expect(codes(validateBooking(booking("2026-12-07T10:00", "2026-12-07T10:00")))).toEqual(["ends_before_start"]);
-    expect(codes(validateBooking(booking("2026-12-07T10:00", "2026-12-07T09:00")))).toEqual(["ends_before_start"]);
+    expect(codes(validateBooking(booking("2026-12-07T10:00", "2026-12-07T10:00")))).toEqual(["after_start"]);
+    expect(codes(validateBooking(booking("2026-12-07T10:00", "2026-12-07T09:00")))).toEqual(["after_start"]);
   });
 
   it("allows two weeks exactly and refuses a minute more ([D] maxBookingMinutes = 14 × 24 × 60)", () => {
@@ -21,7 +21,7 @@ describe("validating a booking", () => {
     const start = local("2026-12-07T00:00");
     const at = (minutes: number) => ({ startsAt: start, endsAt: new Date(start.getTime() + minutes * 60_000), engineers: [] });
     expect(validateBooking(at(maxBookingMinutes)).ok).toBe(true);
-    expect(codes(validateBooking(at(maxBookingMinutes + 1)))).toEqual(["booking_too_long"]);
+    expect(codes(validateBooking(at(maxBookingMinutes + 1)))).toEqual(["max_length"]);
   });
 
   it("refuses instants that are not valid dates", () => {
@@ -47,7 +47,7 @@ describe("quote refuses what it cannot price", () => {
       expect.unreachable();
     } catch (error) {
       expect(error).toBeInstanceOf(PricingError);
-      expect((error as PricingError).problems.map((problem) => problem.code)).toEqual(["ends_before_start", "invalid_time_zone", "unknown_currency"]);
+      expect((error as PricingError).problems.map((problem) => problem.code)).toEqual(["after_start", "invalid_time_zone", "unknown_currency"]);
     }
   });
 

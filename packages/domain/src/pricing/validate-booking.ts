@@ -46,11 +46,11 @@ export function validateBooking(booking: Booking): Validation<{ elapsedMinutes: 
     return { ok: false, problems: [{ code: "not_whole_minutes", field: "startsAt", message: "A booking starts and ends on whole minutes." }] };
   }
   if (endMs <= startMs) {
-    return { ok: false, problems: [{ code: "ends_before_start", field: "endsAt", message: "A booking must end after it starts." }] };
+    return { ok: false, problems: [{ code: "after_start", field: "endsAt", message: "The end must be after the start" }] };
   }
   const elapsedMinutes = (endMs - startMs) / minuteMs;
   if (elapsedMinutes > maxBookingMinutes) {
-    return { ok: false, problems: [{ code: "booking_too_long", field: "endsAt", message: `A booking can last at most ${maxBookingMinutes / 1440} days.` }] };
+    return { ok: false, problems: [{ code: "max_length", field: "endsAt", message: `A booking lasts at most ${maxBookingMinutes / 1440} days; book longer stays as several bookings` }] };
   }
   return { ok: true, value: { elapsedMinutes } };
 }

@@ -1,6 +1,6 @@
 import { asc, eq, inArray, type SQL } from "drizzle-orm";
 import { bookingEngineers, bookingEquipment, bookings, clientAccounts, equipment, projects, rooms, staffProfiles, type DbOrTx } from "@takeup/db";
-import { allowedActions, nearBookedTime, type BookingDto } from "@takeup/domain";
+import { allowedActions, type BookingDto } from "@takeup/domain";
 
 const iso = (d: Date | null) => (d ? d.toISOString() : null);
 
@@ -54,8 +54,7 @@ export async function loadBookingDtos(db: DbOrTx, where: SQL | undefined, limit 
     cancelledAt: iso(b.cancelledAt),
     cancellationReason: b.cancellationReason,
     cancellationFeeCents: b.cancellationFeeCents,
-    // No Start button for a session that is not near its booked time (docs/date-window.md).
-    allowedActions: allowedActions(b.status).filter((a) => !(a === "confirm" && b.queuedBehindId) && !(a === "start" && !nearBookedTime(b.startsAt, b.endsAt, now))),
+    allowedActions: allowedActions(b.status, { queuedBehindId: b.queuedBehindId, startsAt: b.startsAt, endsAt: b.endsAt, now }),
     createdAt: b.createdAt.toISOString(),
   }));
 }

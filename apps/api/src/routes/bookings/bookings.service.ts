@@ -2,8 +2,11 @@ import { and, eq, gt, gte, inArray, lt, type SQL } from "drizzle-orm";
 import { bookingEngineers, bookings, clientAccounts, projects, rateCardVersions, type Db, type Tx } from "@takeup/db";
 import {
   bookingDateProblem,
+  holdToQueueBehind,
   lockoutSpan,
+  mayQueueBehindHold,
   maxBookingMinutes,
+  validateBooking,
   type BookingDto,
   type BookingsQuery,
   type ConflictDto,
@@ -43,20 +46,28 @@ type WindowOptions = {
   lockout?: { timeZone: string } | false;
 };
 
-/** The booked span, checked for order, date window and length. */
+/**
+ * Refuses a span the domain's `validateBooking` finds wrong: its order and length are bad input
+ * (400 invalid_input), anything else it finds (a time off the minute grid) is what pricing would
+ * refuse anyway (400 invalid_booking).
+ */
+function assertSpan(span: { startsAt: Date; endsAt: Date }) {
+  const check = validateBooking({ ...span, engineers: [] });
+  if (check.ok) return;
+  const [first] = check.problems;
+  const code = first!.code === "after_start" || first!.code === "max_length" ? "invalid_input" : "invalid_booking";
+  throw new HttpError(400, code, first!.message, check.problems.map((p) => ({ field: p.field, rule: p.code, message: p.message })));
+}
+
+/** The booked span, checked for date window, order and length (a lockout's once widened to whole days). */
 function window(startsAt: string, endsAt: string, { changed = ["startsAt", "endsAt"], lockout = false }: WindowOptions = {}) {
   const asked = { startsAt: new Date(startsAt), endsAt: new Date(endsAt) };
   inDateWindow(changed.map((field) => ({ field, at: asked[field] })));
-  if (asked.endsAt <= asked.startsAt) {
-    throw new HttpError(400, "invalid_input", "The end must be after the start", [{ field: "endsAt", rule: "after_start", message: "End after the start" }]);
-  }
-  const w = lockout ? lockoutSpan(asked.startsAt, asked.endsAt, lockout.timeZone) : asked;
-  if (w.endsAt.getTime() - w.startsAt.getTime() > maxBookingMinutes * minute) {
-    throw new HttpError(400, "invalid_input", `A booking lasts at most ${maxBookingMinutes / 1440} days; book longer stays as several bookings`, [
-      { field: "endsAt", rule: "max_length", message: `At most ${maxBookingMinutes / 1440} days` },
-    ]);
-  }
-  return w;
+  assertSpan(asked);
+  if (!lockout) return asked;
+  const widened = lockoutSpan(asked.startsAt, asked.endsAt, lockout.timeZone);
+  assertSpan(widened);
+  return widened;
 }
 
 async function requireRoom(tx: Tx, resources: { roomId: number; engineerIds: string[]; equipmentIds: number[] }) {
@@ -87,7 +98,7 @@ export async function previewQuote(db: Db, actor: Actor, input: QuoteInput): Pro
       quote: priced.quote,
       depositRequiredCents: priced.depositRequiredCents,
       conflicts: conflicts.map((c) => (isStaff(actor) ? c : { ...c, clientName: null })),
-      canQueueBehindHold: conflicts.length > 0 && conflicts.every((c) => c.resource === "room" && c.status === "hold"),
+      canQueueBehindHold: mayQueueBehindHold(conflicts),
     };
   });
 }
@@ -114,10 +125,9 @@ export async function createBooking(
     const conflicts = await findConflicts(tx, { ...resources, ...w, turnoverMinutes: room.turnoverMinutes, timeZone: studio.timeZone, now });
     let queuedBehindId: number | null = null;
     if (conflicts.length > 0) {
-      const firstHolds = [...new Set(conflicts.filter((c) => c.resource === "room" && c.status === "hold").map((c) => c.bookingId))];
-      const queueable = input.queueBehindHold && input.status === "hold" && conflicts.every((c) => c.resource === "room" && c.status === "hold") && firstHolds.length === 1;
-      if (!queueable) throw conflictError(conflicts, studio, actor);
-      queuedBehindId = firstHolds[0]!;
+      const firstHold = input.queueBehindHold && input.status === "hold" ? holdToQueueBehind(conflicts) : null;
+      if (firstHold === null) throw conflictError(conflicts, studio, actor);
+      queuedBehindId = firstHold;
     }
     const [created] = await tx
       .insert(bookings)

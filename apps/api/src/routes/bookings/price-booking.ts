@@ -1,12 +1,11 @@
 import { inArray } from "drizzle-orm";
 import { staffProfiles, type DbOrTx, type RateCardVersion, type Room } from "@takeup/db";
-import { PricingError, quote, rateCardFromVersion, type Quote, type StudioDto } from "@takeup/domain";
+import { basisPointsOf, PricingError, quote, rateCardFromVersion, type Quote, type StudioDto } from "@takeup/domain";
 import { HttpError } from "../../lib/http-error.ts";
 import { engineerRatesInForce, rateCardInForce } from "../rooms/rate-cards.service.ts";
 
 export type PricedBooking = { version: RateCardVersion; quote: Quote; depositRequiredCents: number };
 
-const halfUp = (amount: number, bp: number) => Math.floor((amount * bp + 5000) / 10000);
 
 /**
  * Prices a booking on the rate-card version in force at its start (or on `version`, when the
@@ -44,7 +43,7 @@ export async function priceBooking(
       },
       { timeZone: input.studio.timeZone, currency: input.studio.currency },
     );
-    return { version, quote: result, depositRequiredCents: halfUp(result.totalCents, input.studio.depositBp) };
+    return { version, quote: result, depositRequiredCents: basisPointsOf(result.totalCents, input.studio.depositBp) };
   } catch (error) {
     if (error instanceof PricingError) {
       throw new HttpError(

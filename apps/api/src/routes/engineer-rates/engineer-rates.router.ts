@@ -1,7 +1,6 @@
 import { and, asc, desc, eq } from "drizzle-orm";
-import { z } from "zod";
 import { engineerRates, isDuplicateKeyError, staffProfiles } from "@takeup/db";
-import { correctEngineerRateInput, createEngineerRateInput, engineerDto, engineerRateDto, idParams } from "@takeup/domain";
+import { engineerRateRoutes } from "@takeup/domain";
 import { ApiRouter } from "../../lib/api-router.ts";
 import { HttpError, notFound } from "../../lib/http-error.ts";
 import { writeAudit } from "../../lib/audit.ts";
@@ -39,80 +38,48 @@ export function engineerRatesRouter({ db }: Deps) {
     }));
   };
   return new ApiRouter("/api/engineer-rates", "Rooms and rates")
-    .route({
-      method: "get",
-      path: "/",
-      summary: "Engineer rates billed to clients (per grade or per engineer), newest first",
-      access: ["owner", "manager", "bookkeeper"],
-      response: z.array(engineerRateDto),
-      handler: list,
+    .handle(engineerRateRoutes.list, list)
+    .handle(engineerRateRoutes.create, async ({ actor, body }) => {
+      const id = await db.transaction(async (tx) => {
+        if (body.staffUserId) {
+          const [staff] = await tx.select().from(staffProfiles).where(and(eq(staffProfiles.userId, body.staffUserId), eq(staffProfiles.role, "engineer")));
+          if (!staff) throw new HttpError(422, "not_an_engineer", "That person is not an engineer", [{ field: "staffUserId", rule: "engineer", message: "Choose an engineer" }]);
+        }
+        const values = {
+          grade: body.grade,
+          staffUserId: body.staffUserId ?? null,
+          hourlyRateCents: body.hourlyRateCents,
+          effectiveFrom: body.effectiveFrom ? new Date(body.effectiveFrom) : new Date(),
+          createdByUserId: actor.userId,
+        };
+        const [created] = await uniqueRate(values.effectiveFrom, () => tx.insert(engineerRates).values(values).$returningId());
+        await writeAudit(tx, actor, "engineer_rate.added", { type: "engineer_rate", id: created!.id }, { after: values });
+        return created!.id;
+      });
+      return (await list()).find((r) => r.id === id)!;
     })
-    .route({
-      method: "post",
-      path: "/",
-      summary: "Set a new engineer rate from a date; earlier bookings keep their quotes",
-      access: ["owner"],
-      body: createEngineerRateInput,
-      status: 201,
-      response: engineerRateDto,
-      handler: async ({ actor, body }) => {
-        const id = await db.transaction(async (tx) => {
-          if (body.staffUserId) {
-            const [staff] = await tx.select().from(staffProfiles).where(and(eq(staffProfiles.userId, body.staffUserId), eq(staffProfiles.role, "engineer")));
-            if (!staff) throw new HttpError(422, "not_an_engineer", "That person is not an engineer", [{ field: "staffUserId", rule: "engineer", message: "Choose an engineer" }]);
-          }
-          const values = {
-            grade: body.grade,
-            staffUserId: body.staffUserId ?? null,
-            hourlyRateCents: body.hourlyRateCents,
-            effectiveFrom: body.effectiveFrom ? new Date(body.effectiveFrom) : new Date(),
-            createdByUserId: actor.userId,
-          };
-          const [created] = await uniqueRate(values.effectiveFrom, () => tx.insert(engineerRates).values(values).$returningId());
-          await writeAudit(tx, actor, "engineer_rate.added", { type: "engineer_rate", id: created!.id }, { after: values });
-          return created!.id;
+    .handle(engineerRateRoutes.correct, async ({ actor, params, body }) => {
+      await db.transaction(async (tx) => {
+        const [rate] = await tx.select().from(engineerRates).where(eq(engineerRates.id, params.id)).for("update");
+        if (!rate) throw notFound("That engineer rate");
+        const changes = { hourlyRateCents: body.hourlyRateCents ?? rate.hourlyRateCents, effectiveFrom: body.effectiveFrom ? new Date(body.effectiveFrom) : rate.effectiveFrom };
+        await uniqueRate(changes.effectiveFrom, () => tx.update(engineerRates).set(changes).where(eq(engineerRates.id, params.id)));
+        await writeAudit(tx, actor, "engineer_rate.corrected", { type: "engineer_rate", id: params.id }, {
+          before: { hourlyRateCents: rate.hourlyRateCents, effectiveFrom: rate.effectiveFrom },
+          after: { ...changes, reason: body.reason },
         });
-        return (await list()).find((r) => r.id === id)!;
-      },
-    })
-    .route({
-      method: "patch",
-      path: "/:id",
-      summary: "Correct an engineer rate's amount or start, with a reason (audited); bookings already quoted keep their quotes",
-      access: ["owner"],
-      params: idParams,
-      body: correctEngineerRateInput,
-      response: engineerRateDto,
-      handler: async ({ actor, params, body }) => {
-        await db.transaction(async (tx) => {
-          const [rate] = await tx.select().from(engineerRates).where(eq(engineerRates.id, params.id)).for("update");
-          if (!rate) throw notFound("That engineer rate");
-          const changes = { hourlyRateCents: body.hourlyRateCents ?? rate.hourlyRateCents, effectiveFrom: body.effectiveFrom ? new Date(body.effectiveFrom) : rate.effectiveFrom };
-          await uniqueRate(changes.effectiveFrom, () => tx.update(engineerRates).set(changes).where(eq(engineerRates.id, params.id)));
-          await writeAudit(tx, actor, "engineer_rate.corrected", { type: "engineer_rate", id: params.id }, {
-            before: { hourlyRateCents: rate.hourlyRateCents, effectiveFrom: rate.effectiveFrom },
-            after: { ...changes, reason: body.reason },
-          });
-        });
-        return (await list()).find((r) => r.id === params.id)!;
-      },
+      });
+      return (await list()).find((r) => r.id === params.id)!;
     });
 }
 
 export function engineersRouter({ db }: Deps) {
-  return new ApiRouter("/api/engineers", "Rooms and rates").route({
-    method: "get",
-    path: "/",
-    summary: "Active engineers who can be assigned to bookings, with their grade",
-    access: ["owner", "manager"],
-    response: z.array(engineerDto),
-    handler: async () => {
-      const rows = await db
-        .select()
-        .from(staffProfiles)
-        .where(and(eq(staffProfiles.role, "engineer"), eq(staffProfiles.active, true)))
-        .orderBy(asc(staffProfiles.displayName));
-      return rows.map((r) => ({ userId: r.userId, name: r.displayName, grade: r.engineerGrade ?? "engineer" }));
-    },
+  return new ApiRouter("/api/engineers", "Rooms and rates").handle(engineerRateRoutes.engineers, async () => {
+    const rows = await db
+      .select()
+      .from(staffProfiles)
+      .where(and(eq(staffProfiles.role, "engineer"), eq(staffProfiles.active, true)))
+      .orderBy(asc(staffProfiles.displayName));
+    return rows.map((r) => ({ userId: r.userId, name: r.displayName, grade: r.engineerGrade ?? "engineer" }));
   });
 }

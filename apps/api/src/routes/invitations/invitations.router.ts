@@ -1,5 +1,5 @@
 import { fromNodeHeaders } from "better-auth/node";
-import { acceptInvitationInput, invitationDto, invitationTokenParams, meDto } from "@takeup/domain";
+import { invitationRoutes } from "@takeup/domain";
 import { ApiRouter } from "../../lib/api-router.ts";
 import type { Deps } from "../../deps.ts";
 import { loadActor } from "../../lib/actor.ts";
@@ -9,35 +9,17 @@ import { acceptInvitation, getInvitation } from "./invitations.service.ts";
 
 export function invitationsRouter({ db, auth }: Deps) {
   return new ApiRouter("/api/invitations", "Invitations")
-    .route({
-      method: "get",
-      path: "/:token",
-      summary: "What an invitation link is for (who, which role, which studio)",
-      access: "public",
-      params: invitationTokenParams,
-      response: invitationDto,
-      handler: ({ params }) => getInvitation(db, params.token),
-    })
-    .route({
-      method: "post",
-      path: "/:token/accept",
-      summary: "Accept an invitation: set a password and sign in",
-      access: "public",
-      params: invitationTokenParams,
-      body: acceptInvitationInput,
-      status: 201,
-      response: meDto,
-      handler: async ({ req, res, params, body }) => {
-        const email = await acceptInvitation(db, params.token, body.password);
-        const result = await auth.api.signInEmail({
-          body: { email, password: body.password, rememberMe: true },
-          headers: fromNodeHeaders(req.headers),
-          returnHeaders: true,
-        });
-        for (const cookie of result.headers.getSetCookie()) res.append("set-cookie", cookie);
-        const actor = await loadActor(db, result.response.user.id);
-        if (!actor) throw new HttpError(500, "internal_error", "The new sign-in has no role");
-        return toMe(actor);
-      },
+    .handle(invitationRoutes.get, ({ params }) => getInvitation(db, params.token))
+    .handle(invitationRoutes.accept, async ({ req, res, params, body }) => {
+      const email = await acceptInvitation(db, params.token, body.password);
+      const result = await auth.api.signInEmail({
+        body: { email, password: body.password, rememberMe: true },
+        headers: fromNodeHeaders(req.headers),
+        returnHeaders: true,
+      });
+      for (const cookie of result.headers.getSetCookie()) res.append("set-cookie", cookie);
+      const actor = await loadActor(db, result.response.user.id);
+      if (!actor) throw new HttpError(500, "internal_error", "The new sign-in has no role");
+      return toMe(actor);
     });
 }

@@ -1,6 +1,6 @@
 import type { Response } from "express";
 import { fromNodeHeaders } from "better-auth/node";
-import { meDto, okDto, passwordResetInput, passwordResetRequestInput, signInInput, updateMeInput } from "@takeup/domain";
+import { meRoutes, sessionRoutes } from "@takeup/domain";
 import { ApiRouter } from "../../lib/api-router.ts";
 import { fromAuthError } from "../../lib/better-auth-errors.ts";
 import type { Actor } from "../../lib/actor.ts";
@@ -26,106 +26,59 @@ function forwardCookies(res: Response, headers: Headers) {
 /** Sign-in, sign-out and password reset, in our error shape, in front of better-auth. */
 export function sessionRouter({ db, auth, config, throttle }: Deps) {
   return new ApiRouter("/api/session", "Session")
-    .route({
-      method: "post",
-      path: "/",
-      summary: "Sign in with e-mail and password (429 after repeated failures)",
-      access: "public",
-      body: signInInput,
-      response: meDto,
-      handler: async ({ req, res, body }) => {
-        const address = req.ip ?? "unknown";
-        await throttle.assertSignInAllowed(address, body.email);
-        let result;
-        try {
-          result = await auth.api.signInEmail({
-            body: { email: body.email, password: body.password, rememberMe: true },
-            headers: fromNodeHeaders(req.headers),
-            returnHeaders: true,
-          });
-        } catch (error) {
-          await throttle.recordSignInFailure(address, body.email);
-          fromAuthError(error, { code: "invalid_credentials", message: "That e-mail and password do not match" });
-        }
-        await throttle.recordSignInSuccess(address, body.email);
-        const actor = await loadActor(db, result.response.user.id);
-        if (!actor) throw new HttpError(403, "no_role", "This sign-in has no role at the studio");
+    .handle(sessionRoutes.signIn, async ({ req, res, body }) => {
+      const address = req.ip ?? "unknown";
+      await throttle.assertSignInAllowed(address, body.email);
+      let result;
+      try {
+        result = await auth.api.signInEmail({
+          body: { email: body.email, password: body.password, rememberMe: true },
+          headers: fromNodeHeaders(req.headers),
+          returnHeaders: true,
+        });
+      } catch (error) {
+        await throttle.recordSignInFailure(address, body.email);
+        fromAuthError(error, { code: "invalid_credentials", message: "That e-mail and password do not match" });
+      }
+      await throttle.recordSignInSuccess(address, body.email);
+      const actor = await loadActor(db, result.response.user.id);
+      if (!actor) throw new HttpError(403, "no_role", "This sign-in has no role at the studio");
+      forwardCookies(res, result.headers);
+      return toMe(actor);
+    })
+    .handle(sessionRoutes.signOut, async ({ req, res }) => {
+      try {
+        const result = await auth.api.signOut({ headers: fromNodeHeaders(req.headers), returnHeaders: true });
         forwardCookies(res, result.headers);
-        return toMe(actor);
-      },
+      } catch {
+        // Already signed out: nothing to end.
+      }
+      return { ok: true as const };
     })
-    .route({
-      method: "delete",
-      path: "/",
-      summary: "Sign out",
-      access: "public",
-      response: okDto,
-      handler: async ({ req, res }) => {
-        try {
-          const result = await auth.api.signOut({ headers: fromNodeHeaders(req.headers), returnHeaders: true });
-          forwardCookies(res, result.headers);
-        } catch {
-          // Already signed out: nothing to end.
-        }
-        return { ok: true };
-      },
+    .handle(sessionRoutes.requestPasswordReset, async ({ req, res, body }) => {
+      // The same work before answering whether or not the address is known: the throttles are
+      // counted per client address and per e-mail address alike. Looking the account up,
+      // writing the token and sending the e-mail happen after the answer has gone (decision 009).
+      await throttle.assertResetRequestAllowed(req.ip ?? "unknown");
+      if (await throttle.takeResetEmail(body.email)) {
+        afterResponse(res, "password reset e-mail", async () => {
+          await auth.api.requestPasswordReset({ body: { email: body.email, redirectTo: `${config.appUrl}/reset-password` } });
+        });
+      }
+      return { ok: true as const };
     })
-    .route({
-      method: "post",
-      path: "/password-reset-requests",
-      summary: "E-mail a password-reset link (answers the same whether or not the address is known; 429 past 10 requests from one address in 15 minutes)",
-      access: "public",
-      body: passwordResetRequestInput,
-      status: 202,
-      response: okDto,
-      handler: async ({ req, res, body }) => {
-        // The same work before answering whether or not the address is known: the throttles are
-        // counted per client address and per e-mail address alike. Looking the account up,
-        // writing the token and sending the e-mail happen after the answer has gone (decision 009).
-        await throttle.assertResetRequestAllowed(req.ip ?? "unknown");
-        if (await throttle.takeResetEmail(body.email)) {
-          afterResponse(res, "password reset e-mail", async () => {
-            await auth.api.requestPasswordReset({ body: { email: body.email, redirectTo: `${config.appUrl}/reset-password` } });
-          });
-        }
-        return { ok: true };
-      },
-    })
-    .route({
-      method: "post",
-      path: "/password-resets",
-      summary: "Set a new password with the token from a reset e-mail",
-      access: "public",
-      body: passwordResetInput,
-      response: okDto,
-      handler: async ({ body }) => {
-        try {
-          await auth.api.resetPassword({ body: { token: body.token, newPassword: body.password } });
-        } catch (error) {
-          fromAuthError(error, { code: "invalid_reset_token", message: "This reset link has expired or was already used; ask for a new one" });
-        }
-        return { ok: true };
-      },
+    .handle(sessionRoutes.resetPassword, async ({ body }) => {
+      try {
+        await auth.api.resetPassword({ body: { token: body.token, newPassword: body.password } });
+      } catch (error) {
+        fromAuthError(error, { code: "invalid_reset_token", message: "This reset link has expired or was already used; ask for a new one" });
+      }
+      return { ok: true as const };
     });
 }
 
 export function meRouter({ db }: Pick<Deps, "db">) {
   return new ApiRouter("/api/me", "Session")
-    .route({
-      method: "get",
-      path: "/",
-      summary: "The signed-in user and their role",
-      access: "signed-in",
-      response: meDto,
-      handler: async ({ actor }) => toMe(actor),
-    })
-    .route({
-      method: "patch",
-      path: "/",
-      summary: "Change one's own name (plain text, 1–100 characters; audited)",
-      access: "signed-in",
-      body: updateMeInput,
-      response: meDto,
-      handler: async ({ actor, body }) => toMe(await updateOwnProfile(db, actor, body)),
-    });
+    .handle(meRoutes.get, async ({ actor }) => toMe(actor))
+    .handle(meRoutes.update, async ({ actor, body }) => toMe(await updateOwnProfile(db, actor, body)));
 }

@@ -1,10 +1,10 @@
 import { queryOptions, useQuery } from "@tanstack/react-query";
-import { invitationDto } from "@takeup/domain";
-import { api } from "../../../lib/api-client.ts";
+import { invitationRoutes } from "@takeup/domain";
+import { callApi } from "../../../lib/api-client.ts";
 import { authKeys } from "./auth-keys.ts";
 
 export const getInvitation = (token: string, signal?: AbortSignal) =>
-  api.get(`/api/invitations/${encodeURIComponent(token)}`, invitationDto, signal);
+  callApi(invitationRoutes.get, { params: { token }, signal });
 
 export const invitationQueryOptions = (token: string) =>
   queryOptions({

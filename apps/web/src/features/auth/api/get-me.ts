@@ -1,12 +1,12 @@
 import { queryOptions, useQuery, type QueryClient } from "@tanstack/react-query";
-import { meDto, type MeDto } from "@takeup/domain";
-import { api, ApiError } from "../../../lib/api-client.ts";
+import { meRoutes, type MeDto } from "@takeup/domain";
+import { ApiError, callApi } from "../../../lib/api-client.ts";
 import { authKeys } from "./auth-keys.ts";
 
 /** The signed-in person, or null when nobody is signed in (a 401 is an answer here, not an error). */
 export async function getMe(signal?: AbortSignal): Promise<MeDto | null> {
   try {
-    return await api.get("/api/me", meDto, signal);
+    return await callApi(meRoutes.get, { signal });
   } catch (error) {
     if (error instanceof ApiError && error.status === 401) return null;
     throw error;

@@ -1,7 +1,7 @@
 import { useMutation } from "@tanstack/react-query";
-import type { PasswordResetInput } from "@takeup/domain";
-import { api } from "../../../lib/api-client.ts";
+import { sessionRoutes, type PasswordResetInput } from "@takeup/domain";
+import { callApi } from "../../../lib/api-client.ts";
 
-export const resetPassword = (input: PasswordResetInput) => api.post("/api/session/password-resets", input);
+export const resetPassword = (input: PasswordResetInput) => callApi(sessionRoutes.resetPassword, { body: input });
 
 export const useResetPassword = () => useMutation({ mutationFn: resetPassword });

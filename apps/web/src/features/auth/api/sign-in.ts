@@ -1,9 +1,9 @@
 import { useMutation, useQueryClient } from "@tanstack/react-query";
-import { meDto, type MeDto, type SignInInput } from "@takeup/domain";
-import { api } from "../../../lib/api-client.ts";
+import { sessionRoutes, type MeDto, type SignInInput } from "@takeup/domain";
+import { callApi } from "../../../lib/api-client.ts";
 import { startSession } from "./get-me.ts";
 
-export const signIn = (input: SignInInput) => api.post("/api/session", input, meDto);
+export const signIn = (input: SignInInput) => callApi(sessionRoutes.signIn, { body: input });
 
 export function useSignIn({ onSuccess }: { onSuccess?: (me: MeDto) => void } = {}) {
   const queryClient = useQueryClient();

@@ -1,9 +1,9 @@
 import { useMutation, useQueryClient } from "@tanstack/react-query";
-import { meDto, type UpdateMeInput } from "@takeup/domain";
-import { api } from "../../../lib/api-client.ts";
+import { meRoutes, type UpdateMeInput } from "@takeup/domain";
+import { callApi } from "../../../lib/api-client.ts";
 import { authKeys } from "./auth-keys.ts";
 
-export const updateMe = (input: UpdateMeInput) => api.patch("/api/me", input, meDto);
+export const updateMe = (input: UpdateMeInput) => callApi(meRoutes.update, { body: input });
 
 export function useUpdateMe() {
   const queryClient = useQueryClient();

@@ -1,4 +1,4 @@
-import type { QuoteInput } from "@takeup/domain";
+import type { BookingStatus, QuoteInput } from "@takeup/domain";
 
 export type BookingsParams = {
   from: string;
@@ -6,7 +6,7 @@ export type BookingsParams = {
   roomId?: number;
   engineerId?: string;
   clientAccountId?: number;
-  status?: string;
+  status?: BookingStatus;
 };
 
 export const bookingKeys = {

@@ -1,10 +1,10 @@
 import { useMutation, useQueryClient } from "@tanstack/react-query";
-import { bookingDto } from "@takeup/domain";
-import { api } from "../../../lib/api-client.ts";
+import { bookingRoutes } from "@takeup/domain";
+import { callApi } from "../../../lib/api-client.ts";
 import { settleBooking } from "./booking-cache.ts";
 
 /** A hold becomes a confirmed booking; the deposit may be marked received at the same time. */
-export const confirmBooking = (id: number, input: { depositReceived?: boolean }) => api.post(`/api/bookings/${id}/confirm`, input, bookingDto);
+export const confirmBooking = (id: number, input: { depositReceived?: boolean }) => callApi(bookingRoutes.confirm, { params: { id }, body: input });
 
 export function useConfirmBooking(id: number) {
   const queryClient = useQueryClient();

@@ -1,10 +1,10 @@
 import { useMutation, useQueryClient } from "@tanstack/react-query";
-import { bookingDto, type BookingRequestInput } from "@takeup/domain";
-import { api } from "../../../lib/api-client.ts";
+import { bookingRoutes, type BookingRequestInput } from "@takeup/domain";
+import { callApi } from "../../../lib/api-client.ts";
 import { settleBooking } from "./booking-cache.ts";
 
 /** A client asks for a slot; it arrives at the studio as a hold to confirm. */
-export const createBookingRequest = (input: BookingRequestInput) => api.post("/api/booking-requests", input, bookingDto);
+export const createBookingRequest = (input: BookingRequestInput) => callApi(bookingRoutes.request, { body: input });
 
 export function useCreateBookingRequest() {
   const queryClient = useQueryClient();

@@ -1,10 +1,10 @@
 import { useMutation, useQueryClient } from "@tanstack/react-query";
-import { bookingDto, type CreateBookingInput } from "@takeup/domain";
-import { api } from "../../../lib/api-client.ts";
+import { bookingRoutes, type CreateBookingInput } from "@takeup/domain";
+import { callApi } from "../../../lib/api-client.ts";
 import { settleBooking } from "./booking-cache.ts";
 
 /** 409 booking_conflict when the slot was taken since the quote. */
-export const createBooking = (input: CreateBookingInput) => api.post("/api/bookings", input, bookingDto);
+export const createBooking = (input: CreateBookingInput) => callApi(bookingRoutes.create, { body: input });
 
 export function useCreateBooking() {
   const queryClient = useQueryClient();

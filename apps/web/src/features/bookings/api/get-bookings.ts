@@ -1,14 +1,11 @@
 import { keepPreviousData, queryOptions, useQuery } from "@tanstack/react-query";
-import { z } from "zod";
-import { bookingDto } from "@takeup/domain";
-import { api } from "../../../lib/api-client.ts";
+import { bookingRoutes } from "@takeup/domain";
+import { callApi } from "../../../lib/api-client.ts";
 import { bookingKeys, type BookingsParams } from "./booking-keys.ts";
 
 /** Bookings overlapping [from, to); the API answers for at most 62 days at a time. */
 export function getBookings(params: BookingsParams, signal?: AbortSignal) {
-  const query = new URLSearchParams();
-  for (const [key, value] of Object.entries(params)) if (value !== undefined && value !== "") query.set(key, String(value));
-  return api.get(`/api/bookings?${query.toString()}`, z.array(bookingDto), signal);
+  return callApi(bookingRoutes.list, { query: params, signal });
 }
 
 export const bookingsQueryOptions = (params: BookingsParams) =>

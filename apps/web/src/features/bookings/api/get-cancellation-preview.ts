@@ -1,11 +1,10 @@
 import { useQuery } from "@tanstack/react-query";
-import { cancellationPreviewDto } from "@takeup/domain";
-import { api } from "../../../lib/api-client.ts";
+import { bookingRoutes } from "@takeup/domain";
+import { callApi } from "../../../lib/api-client.ts";
 import { bookingKeys } from "./booking-keys.ts";
 
 /** What cancelling now would cost, and why; asked afresh each time, since notice shrinks by the minute. */
-export const getCancellationPreview = (id: number, signal?: AbortSignal) =>
-  api.get(`/api/bookings/${id}/cancellation-preview`, cancellationPreviewDto, signal);
+export const getCancellationPreview = (id: number, signal?: AbortSignal) => callApi(bookingRoutes.cancellationPreview, { params: { id }, signal });
 
 export const useCancellationPreview = (id: number, { enabled = true }: { enabled?: boolean } = {}) =>
   useQuery({

@@ -1,9 +1,9 @@
 import { useMutation, useQueryClient } from "@tanstack/react-query";
-import { bookingDto, type UpdateBookingInput } from "@takeup/domain";
-import { api } from "../../../lib/api-client.ts";
+import { bookingRoutes, type UpdateBookingInput } from "@takeup/domain";
+import { callApi } from "../../../lib/api-client.ts";
 import { settleBooking } from "./booking-cache.ts";
 
-export const updateBooking = (id: number, input: UpdateBookingInput) => api.patch(`/api/bookings/${id}`, input, bookingDto);
+export const updateBooking = (id: number, input: UpdateBookingInput) => callApi(bookingRoutes.update, { params: { id }, body: input });
 
 export function useUpdateBooking(id: number) {
   const queryClient = useQueryClient();

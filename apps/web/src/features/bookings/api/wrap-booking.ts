@@ -1,10 +1,10 @@
 import { useMutation, useQueryClient } from "@tanstack/react-query";
-import { bookingDto } from "@takeup/domain";
-import { api } from "../../../lib/api-client.ts";
+import { bookingRoutes } from "@takeup/domain";
+import { callApi } from "../../../lib/api-client.ts";
 import { settleBooking } from "./booking-cache.ts";
 
 /** The session is over. */
-export const wrapBooking = (id: number) => api.post(`/api/bookings/${id}/wrap`, {}, bookingDto);
+export const wrapBooking = (id: number) => callApi(bookingRoutes.wrap, { params: { id } });
 
 export function useWrapBooking(id: number) {
   const queryClient = useQueryClient();

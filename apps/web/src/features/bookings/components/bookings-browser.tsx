@@ -1,5 +1,5 @@
 import { useMemo, useState } from "react";
-import { bookingStatuses, bookingStatusLabels, formatMoney, roomColourHex, type BookingDto, type ClientSummaryDto, type RoomDto } from "@takeup/domain";
+import { bookingStatuses, bookingStatusLabels, formatMoney, roomColourHex, type BookingDto, type BookingStatus, type ClientSummaryDto, type RoomDto } from "@takeup/domain";
 import { DataTable, type ColumnDef } from "../../../components/ui/data-table.tsx";
 import { FormField } from "../../../components/ui/form-field.tsx";
 import { Input } from "../../../components/ui/input.tsx";
@@ -24,7 +24,7 @@ export function BookingsBrowser({ rooms, clients, timeZone, onOpenBooking }: Boo
   const [from, setFrom] = useState(today);
   const [to, setTo] = useState(addDays(today, 30));
   const [roomId, setRoomId] = useState("");
-  const [status, setStatus] = useState("");
+  const [status, setStatus] = useState<BookingStatus | "">("");
   const [clientId, setClientId] = useState("");
 
   const span = /^\d{4}-\d{2}-\d{2}$/.test(from) && /^\d{4}-\d{2}-\d{2}$/.test(to) ? daysBetween(from, to) + 1 : NaN;
@@ -152,7 +152,7 @@ export function BookingsBrowser({ rooms, clients, timeZone, onOpenBooking }: Boo
         </FormField>
         <FormField label="Status">
           {(field) => (
-            <Select {...field} value={status} onChange={(e) => setStatus(e.target.value)}>
+            <Select {...field} value={status} onChange={(e) => setStatus(e.target.value as BookingStatus | "")}>
               <option value="">Any status</option>
               {bookingStatuses.map((s) => (
                 <option key={s} value={s}>

@@ -1,12 +1,12 @@
 import { useMutation, useQueryClient } from "@tanstack/react-query";
-import { calendarFeedDto } from "@takeup/domain";
-import { api } from "../../../lib/api-client.ts";
+import { calendarFeedRoutes } from "@takeup/domain";
+import { callApi } from "../../../lib/api-client.ts";
 import { calendarFeedKeys } from "./calendar-feed-keys.ts";
 
 export type CalendarFeedTarget = { roomId: number } | { staffUserId: string };
 
 /** The answer carries the feed's address, this once. */
-export const createCalendarFeed = (target: CalendarFeedTarget) => api.post("/api/calendar-feeds", target, calendarFeedDto);
+export const createCalendarFeed = (target: CalendarFeedTarget) => callApi(calendarFeedRoutes.create, { body: target });
 
 export function useCreateCalendarFeed() {
   const queryClient = useQueryClient();

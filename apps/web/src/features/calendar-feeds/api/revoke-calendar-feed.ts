@@ -1,9 +1,10 @@
 import { useMutation, useQueryClient } from "@tanstack/react-query";
-import { api } from "../../../lib/api-client.ts";
+import { calendarFeedRoutes } from "@takeup/domain";
+import { callApi } from "../../../lib/api-client.ts";
 import { calendarFeedKeys } from "./calendar-feed-keys.ts";
 
 /** Calendars subscribed to the address stop updating. */
-export const revokeCalendarFeed = (id: number) => api.delete(`/api/calendar-feeds/${id}`);
+export const revokeCalendarFeed = (id: number) => callApi(calendarFeedRoutes.revoke, { params: { id } });
 
 export function useRevokeCalendarFeed() {
   const queryClient = useQueryClient();

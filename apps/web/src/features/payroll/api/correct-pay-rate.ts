@@ -1,9 +1,9 @@
 import { useMutation, useQueryClient } from "@tanstack/react-query";
-import { payRateDto, type CorrectPayRateInput } from "@takeup/domain";
-import { api } from "../../../lib/api-client.ts";
+import { payrollRoutes, type CorrectPayRateInput } from "@takeup/domain";
+import { callApi } from "../../../lib/api-client.ts";
 import { payrollKeys } from "./payroll-keys.ts";
 
-export const correctPayRate = ({ id, ...input }: CorrectPayRateInput & { id: number }) => api.patch(`/api/pay-rates/${id}`, input, payRateDto);
+export const correctPayRate = ({ id, ...input }: CorrectPayRateInput & { id: number }) => callApi(payrollRoutes.correctRate, { params: { id }, body: input });
 
 export function useCorrectPayRate() {
   const queryClient = useQueryClient();

@@ -1,9 +1,9 @@
 import { useMutation, useQueryClient } from "@tanstack/react-query";
-import { payRateDto, type CreatePayRateInput } from "@takeup/domain";
-import { api } from "../../../lib/api-client.ts";
+import { payrollRoutes, type CreatePayRateInput } from "@takeup/domain";
+import { callApi } from "../../../lib/api-client.ts";
 import { payrollKeys } from "./payroll-keys.ts";
 
-export const createPayRate = (input: CreatePayRateInput) => api.post("/api/pay-rates", input, payRateDto);
+export const createPayRate = (input: CreatePayRateInput) => callApi(payrollRoutes.createRate, { body: input });
 
 export function useCreatePayRate() {
   const queryClient = useQueryClient();

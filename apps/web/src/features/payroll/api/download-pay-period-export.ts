@@ -1,5 +1,5 @@
-import { apiErrorDto } from "@takeup/domain";
-import { ApiError } from "../../../lib/api-client.ts";
+import { payrollRoutes, routeUrl } from "@takeup/domain";
+import { ApiError, apiErrorOf } from "../../../lib/api-client.ts";
 
 export type ExportFormat = "xlsx" | "csv";
 export type ExportFile = { blob: Blob; filename: string; bytes: number };
@@ -26,18 +26,6 @@ export function filenameFromDisposition(header: string | null): string | null {
   return name ? (name.split(/[\\/]/).pop() ?? null) : null;
 }
 
-async function failure(response: Response): Promise<ApiError> {
-  let body: unknown;
-  try {
-    body = await response.json();
-  } catch {
-    body = undefined;
-  }
-  const parsed = apiErrorDto.safeParse(body);
-  if (parsed.success) return new ApiError(response.status, parsed.data.error.code, parsed.data.error.message, parsed.data.error.details);
-  return new ApiError(response.status, "unexpected_response", `The server answered with an error (${response.status}). Try again in a moment.`);
-}
-
 /**
  * Fetches a period's export and reads it as it streams (the server sends no Content-Length),
  * telling `onProgress` the bytes received so far. The caller saves the file.
@@ -49,12 +37,12 @@ export async function downloadPayPeriodExport(
 ): Promise<ExportFile> {
   let response: Response;
   try {
-    response = await fetch(`/api/pay-periods/${id}/export?format=${format}`, { credentials: "same-origin", signal });
+    response = await fetch(routeUrl(payrollRoutes.exportPeriod.path, { id }, { format }), { credentials: "same-origin", signal });
   } catch (error) {
     if (error instanceof DOMException && error.name === "AbortError") throw error;
     throw new ApiError(0, "network_error", "Takeup could not reach the server. Check the connection and try again.");
   }
-  if (!response.ok) throw await failure(response);
+  if (!response.ok) throw await apiErrorOf(response);
 
   const filename = filenameFromDisposition(response.headers.get("content-disposition")) ?? `takeup-payroll-${id}.${format}`;
   const type = response.headers.get("content-type")?.split(";")[0]?.trim() || mimeTypes[format];

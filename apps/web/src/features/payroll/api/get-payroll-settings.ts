@@ -1,9 +1,9 @@
 import { queryOptions, useQuery } from "@tanstack/react-query";
-import { payrollSettingsDto } from "@takeup/domain";
-import { api } from "../../../lib/api-client.ts";
+import { payrollRoutes } from "@takeup/domain";
+import { callApi } from "../../../lib/api-client.ts";
 import { payrollKeys } from "./payroll-keys.ts";
 
-export const getPayrollSettings = (signal?: AbortSignal) => api.get("/api/payroll-settings", payrollSettingsDto, signal);
+export const getPayrollSettings = (signal?: AbortSignal) => callApi(payrollRoutes.settings, { signal });
 
 export const payrollSettingsQueryOptions = () =>
   queryOptions({ queryKey: payrollKeys.settings(), queryFn: ({ signal }) => getPayrollSettings(signal) });

@@ -1,9 +1,9 @@
 import { useMutation, useQueryClient } from "@tanstack/react-query";
-import { payrollSettingsDto, type UpdatePayrollSettingsInput } from "@takeup/domain";
-import { api } from "../../../lib/api-client.ts";
+import { payrollRoutes, type UpdatePayrollSettingsInput } from "@takeup/domain";
+import { callApi } from "../../../lib/api-client.ts";
 import { payrollKeys } from "./payroll-keys.ts";
 
-export const updatePayrollSettings = (input: UpdatePayrollSettingsInput) => api.patch("/api/payroll-settings", input, payrollSettingsDto);
+export const updatePayrollSettings = (input: UpdatePayrollSettingsInput) => callApi(payrollRoutes.updateSettings, { body: input });
 
 export function useUpdatePayrollSettings() {
   const queryClient = useQueryClient();

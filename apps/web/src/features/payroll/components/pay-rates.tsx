@@ -11,7 +11,6 @@ import { FormAlert, FormField } from "../../../components/ui/form-field.tsx";
 import { Input } from "../../../components/ui/input.tsx";
 import { Select } from "../../../components/ui/select.tsx";
 import { useToast } from "../../../components/ui/use-toast.ts";
-import { ApiError } from "../../../lib/api-client.ts";
 import { applyApiErrors } from "../../../lib/form-errors.ts";
 import { formatDayLong, formatDayShort, studioToday } from "../../../lib/studio-time.ts";
 import { fromMinorUnits, toMinorUnits } from "../../../lib/units.ts";
@@ -105,7 +104,7 @@ function CorrectPayRateDialog({ rate, currency, onClose }: { rate: PayRateDto; c
           toast(`${saved.staffName}: ${saved.code} corrected to ${formatMoney(saved.hourlyRateCents, currency)} an hour from ${formatDayLong(saved.effectiveFrom)}`);
           onClose();
         },
-        onError: (error) => setFormError(applyApiErrors(inFormTerms(error), setError, { fields: ["rate", "effectiveFrom", "reason"] })),
+        onError: (error) => setFormError(applyApiErrors(error, setError, { fields: ["rate", "effectiveFrom", "reason"], fromApiField })),
       },
     );
   });
@@ -154,10 +153,7 @@ function payRateForm(currency: string) {
 type PayRateValues = z.infer<ReturnType<typeof payRateForm>>;
 
 /** The API names the cents field; the form shows it as an amount. */
-function inFormTerms(error: unknown): unknown {
-  if (!(error instanceof ApiError)) return error;
-  return new ApiError(error.status, error.code, error.message, error.details.map((d) => ({ ...d, field: d.field === "hourlyRateCents" ? "rate" : d.field })));
-}
+const fromApiField = (field: string): string => (field === "hourlyRateCents" ? "rate" : field);
 
 type PayRateFormProps = { members: StaffMemberDto[]; currency: string; timeZone: string };
 
@@ -181,7 +177,7 @@ export function PayRateForm({ members, currency, timeZone }: PayRateFormProps) {
           reset(defaultValues);
         },
         onError: (error) =>
-          setFormError(applyApiErrors(inFormTerms(error), setError, { fields: ["staffUserId", "code", "rate", "effectiveFrom"], codeFields: { not_found: "staffUserId" } })),
+          setFormError(applyApiErrors(error, setError, { fields: ["staffUserId", "code", "rate", "effectiveFrom"], codeFields: { not_found: "staffUserId" }, fromApiField })),
       },
     );
   });

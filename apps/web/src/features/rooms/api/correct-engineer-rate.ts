@@ -1,9 +1,9 @@
 import { useMutation, useQueryClient } from "@tanstack/react-query";
-import { engineerRateDto, type CorrectEngineerRateInput } from "@takeup/domain";
-import { api } from "../../../lib/api-client.ts";
+import { engineerRateRoutes, type CorrectEngineerRateInput } from "@takeup/domain";
+import { callApi } from "../../../lib/api-client.ts";
 import { roomKeys } from "./room-keys.ts";
 
-export const correctEngineerRate = ({ id, ...input }: CorrectEngineerRateInput & { id: number }) => api.patch(`/api/engineer-rates/${id}`, input, engineerRateDto);
+export const correctEngineerRate = ({ id, ...input }: CorrectEngineerRateInput & { id: number }) => callApi(engineerRateRoutes.correct, { params: { id }, body: input });
 
 export function useCorrectEngineerRate() {
   const queryClient = useQueryClient();

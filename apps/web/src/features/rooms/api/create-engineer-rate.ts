@@ -1,9 +1,9 @@
 import { useMutation, useQueryClient } from "@tanstack/react-query";
-import { engineerRateDto, type CreateEngineerRateInput } from "@takeup/domain";
-import { api } from "../../../lib/api-client.ts";
+import { engineerRateRoutes, type CreateEngineerRateInput } from "@takeup/domain";
+import { callApi } from "../../../lib/api-client.ts";
 import { roomKeys } from "./room-keys.ts";
 
-export const createEngineerRate = (input: CreateEngineerRateInput) => api.post("/api/engineer-rates", input, engineerRateDto);
+export const createEngineerRate = (input: CreateEngineerRateInput) => callApi(engineerRateRoutes.create, { body: input });
 
 export function useCreateEngineerRate() {
   const queryClient = useQueryClient();

@@ -1,11 +1,10 @@
 import { queryOptions, useQuery } from "@tanstack/react-query";
-import { z } from "zod";
-import { engineerDto } from "@takeup/domain";
-import { api } from "../../../lib/api-client.ts";
+import { engineerRateRoutes } from "@takeup/domain";
+import { callApi } from "../../../lib/api-client.ts";
 import { roomKeys } from "./room-keys.ts";
 
 /** Active engineers and assistants with their grade, for booking and for per-engineer rates. */
-export const getEngineers = (signal?: AbortSignal) => api.get("/api/engineers", z.array(engineerDto), signal);
+export const getEngineers = (signal?: AbortSignal) => callApi(engineerRateRoutes.engineers, { signal });
 
 export const engineersQueryOptions = () => queryOptions({ queryKey: roomKeys.engineers(), queryFn: ({ signal }) => getEngineers(signal) });
 

@@ -18,7 +18,6 @@ import { Input } from "../../../components/ui/input.tsx";
 import { Select } from "../../../components/ui/select.tsx";
 import { Textarea } from "../../../components/ui/textarea.tsx";
 import { useToast } from "../../../components/ui/use-toast.ts";
-import { ApiError } from "../../../lib/api-client.ts";
 import { applyApiErrors } from "../../../lib/form-errors.ts";
 import { parseNumberList } from "../../../lib/units.ts";
 import { useCreateEquipment } from "../api/create-equipment.ts";
@@ -59,15 +58,7 @@ const toInput = (values: EquipmentFormValues): CreateEquipmentInput => ({
   notes: values.notes,
 });
 
-function inFormTerms(error: unknown): unknown {
-  if (!(error instanceof ApiError)) return error;
-  return new ApiError(
-    error.status,
-    error.code,
-    error.message,
-    error.details.map((detail) => ({ ...detail, field: detail.field.startsWith("speedsIps") ? "speeds" : detail.field })),
-  );
-}
+const fromApiField = (field: string): string => (field.startsWith("speedsIps") ? "speeds" : field);
 
 type EquipmentFormDialogProps = { open: boolean; onClose: () => void; rooms: RoomDto[]; item?: EquipmentDto };
 
@@ -135,7 +126,7 @@ function EquipmentForm({ rooms, defaultValues, submitLabel, showActive, onSubmit
     try {
       await onSubmit(values);
     } catch (error) {
-      setFormError(applyApiErrors(inFormTerms(error), setError, { fields }));
+      setFormError(applyApiErrors(error, setError, { fields, fromApiField }));
     }
   });
 

@@ -8,7 +8,6 @@ import { Dialog, DialogActions } from "../../../components/ui/dialog.tsx";
 import { FormAlert, FormField } from "../../../components/ui/form-field.tsx";
 import { Input } from "../../../components/ui/input.tsx";
 import { useToast } from "../../../components/ui/use-toast.ts";
-import { ApiError } from "../../../lib/api-client.ts";
 import { applyApiErrors } from "../../../lib/form-errors.ts";
 import { minuteToTime, studioLocalDateTimeToIso, studioNowLocal, timeToMinute } from "../../../lib/studio-time.ts";
 import { bpToPercent, fromMinorUnits, percentToBp, toMinorUnits } from "../../../lib/units.ts";
@@ -53,11 +52,7 @@ const apiFieldToForm: Record<string, keyof RateCardFormValues> = {
 };
 const fields = Object.values(apiFieldToForm);
 
-function inFormTerms(error: unknown): unknown {
-  if (!(error instanceof ApiError)) return error;
-  const details = error.details.map((detail) => ({ ...detail, field: apiFieldToForm[detail.field] ?? detail.field }));
-  return new ApiError(error.status, error.code, error.message, details);
-}
+const fromApiField = (field: string): string => apiFieldToForm[field] ?? field;
 
 /** Starts from the prices in force, so the owner changes only what moves. */
 function startingValues(current: RateCardVersionDto | null, currency: string, effectiveFrom: string): RateCardFormValues {
@@ -134,7 +129,7 @@ function RateCardForm({ room, timeZone, currency, onDone }: { room: RoomDto; tim
       toast(`${room.name} rate card version ${saved.version} saved`);
       onDone();
     } catch (error) {
-      setFormError(applyApiErrors(inFormTerms(error), setError, { fields }));
+      setFormError(applyApiErrors(error, setError, { fields, fromApiField }));
     }
   });
 

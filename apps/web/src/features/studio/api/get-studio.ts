@@ -1,9 +1,9 @@
 import { queryOptions, useQuery } from "@tanstack/react-query";
-import { studioDto } from "@takeup/domain";
-import { api } from "../../../lib/api-client.ts";
+import { studioRoutes } from "@takeup/domain";
+import { callApi } from "../../../lib/api-client.ts";
 import { studioKeys } from "./studio-keys.ts";
 
-export const getStudio = (signal?: AbortSignal) => api.get("/api/studio", studioDto, signal);
+export const getStudio = (signal?: AbortSignal) => callApi(studioRoutes.get, { signal });
 
 export const studioQueryOptions = () =>
   queryOptions({ queryKey: studioKeys.detail(), queryFn: ({ signal }) => getStudio(signal), staleTime: 5 * 60_000 });

@@ -1,9 +1,9 @@
 import { useMutation, useQueryClient } from "@tanstack/react-query";
-import { studioDto, type UpdateStudioInput } from "@takeup/domain";
-import { api } from "../../../lib/api-client.ts";
+import { studioRoutes, type UpdateStudioInput } from "@takeup/domain";
+import { callApi } from "../../../lib/api-client.ts";
 import { studioKeys } from "./studio-keys.ts";
 
-export const updateStudio = (input: UpdateStudioInput) => api.patch("/api/studio", input, studioDto);
+export const updateStudio = (input: UpdateStudioInput) => callApi(studioRoutes.update, { body: input });
 
 export function useUpdateStudio() {
   const queryClient = useQueryClient();

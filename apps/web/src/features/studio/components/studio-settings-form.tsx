@@ -9,7 +9,6 @@ import { Input } from "../../../components/ui/input.tsx";
 import { Select } from "../../../components/ui/select.tsx";
 import { Textarea } from "../../../components/ui/textarea.tsx";
 import { useToast } from "../../../components/ui/use-toast.ts";
-import { ApiError } from "../../../lib/api-client.ts";
 import { applyApiErrors } from "../../../lib/form-errors.ts";
 import { bpToPercent, percentToBp } from "../../../lib/units.ts";
 import { useUpdateStudio } from "../api/update-studio.ts";
@@ -66,14 +65,7 @@ const toInput = ({ depositPercent, cancellationTiers, ...rest }: SettingsFormVal
 });
 
 /** The API names the basis-point fields; the form shows them as percent fields. */
-function inFormTerms(error: unknown): unknown {
-  if (!(error instanceof ApiError)) return error;
-  const details = error.details.map((detail) => ({
-    ...detail,
-    field: detail.field.replace(/^depositBp$/, "depositPercent").replace(/\.feeBp$/, ".feePercent"),
-  }));
-  return new ApiError(error.status, error.code, error.message, details);
-}
+const fromApiField = (field: string): string => field.replace(/^depositBp$/, "depositPercent").replace(/\.feeBp$/, ".feePercent");
 
 // Offered as suggestions only; the schema is what decides whether a zone is real.
 const knownZones = typeof Intl.supportedValuesOf === "function" ? Intl.supportedValuesOf("timeZone") : [];
@@ -95,7 +87,7 @@ export function StudioSettingsForm({ studio }: { studio: StudioDto }) {
         reset(toFormValues(saved));
         toast("Studio settings saved");
       },
-      onError: (error) => setFormError(applyApiErrors(inFormTerms(error), setError, { fields })),
+      onError: (error) => setFormError(applyApiErrors(error, setError, { fields, fromApiField })),
     });
   });
 

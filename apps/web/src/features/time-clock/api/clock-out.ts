@@ -1,10 +1,10 @@
 import { useMutation, useQueryClient } from "@tanstack/react-query";
-import { timeEntryDto } from "@takeup/domain";
-import { api } from "../../../lib/api-client.ts";
+import { timeClockRoutes } from "@takeup/domain";
+import { callApi } from "../../../lib/api-client.ts";
 import { refreshClock, settleClock } from "./settle-clock.ts";
 
 /** Closes the open entry (and any break still running). 409 not_clocked_in. */
-export const clockOut = () => api.post("/api/time-clock/clock-out", {}, timeEntryDto);
+export const clockOut = () => callApi(timeClockRoutes.clockOut);
 
 export function useClockOut() {
   const queryClient = useQueryClient();

@@ -1,10 +1,10 @@
 import { useMutation, useQueryClient } from "@tanstack/react-query";
-import { timeEntryDto } from "@takeup/domain";
-import { api } from "../../../lib/api-client.ts";
+import { timeClockRoutes } from "@takeup/domain";
+import { callApi } from "../../../lib/api-client.ts";
 import { refreshClock, settleClock } from "./settle-clock.ts";
 
 /** Back to work. 409 not_on_break. */
-export const endBreak = () => api.post("/api/time-clock/break-end", {}, timeEntryDto);
+export const endBreak = () => callApi(timeClockRoutes.breakEnd);
 
 export function useEndBreak() {
   const queryClient = useQueryClient();

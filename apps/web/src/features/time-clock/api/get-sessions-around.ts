@@ -1,7 +1,6 @@
 import { queryOptions, useQuery } from "@tanstack/react-query";
-import { z } from "zod";
-import { bookingDto } from "@takeup/domain";
-import { api } from "../../../lib/api-client.ts";
+import { bookingRoutes } from "@takeup/domain";
+import { callApi } from "../../../lib/api-client.ts";
 import { addDays, studioDayStartIso } from "../../../lib/studio-time.ts";
 import { timeClockKeys } from "./time-clock-keys.ts";
 
@@ -12,8 +11,8 @@ export type SessionChoice = { id: number; clientName: string; roomName: string; 
  * days), for tying a correction or missing time to one. Cancelled bookings are left out.
  */
 export async function getSessionsAround(staffUserId: string, day: string, timeZone: string, signal?: AbortSignal): Promise<SessionChoice[]> {
-  const query = new URLSearchParams({ from: studioDayStartIso(addDays(day, -1), timeZone), to: studioDayStartIso(addDays(day, 2), timeZone), engineerId: staffUserId });
-  const bookings = await api.get(`/api/bookings?${query.toString()}`, z.array(bookingDto), signal);
+  const query = { from: studioDayStartIso(addDays(day, -1), timeZone), to: studioDayStartIso(addDays(day, 2), timeZone), engineerId: staffUserId };
+  const bookings = await callApi(bookingRoutes.list, { query, signal });
   return bookings
     .filter((b) => b.status !== "cancelled" && b.status !== "hold" && b.engineers.some((e) => e.userId === staffUserId))
     .map((b) => ({ id: b.id, clientName: b.client.name, roomName: b.room.name, startsAt: b.startsAt, endsAt: b.endsAt }));

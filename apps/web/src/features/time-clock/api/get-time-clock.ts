@@ -1,10 +1,10 @@
 import { queryOptions, useQuery } from "@tanstack/react-query";
-import { timeClockDto } from "@takeup/domain";
-import { api } from "../../../lib/api-client.ts";
+import { timeClockRoutes } from "@takeup/domain";
+import { callApi } from "../../../lib/api-client.ts";
 import { timeClockKeys } from "./time-clock-keys.ts";
 
 /** The signed-in person's clock: the open entry, sessions now and the workweek so far. */
-export const getTimeClock = (signal?: AbortSignal) => api.get("/api/time-clock", timeClockDto, signal);
+export const getTimeClock = (signal?: AbortSignal) => callApi(timeClockRoutes.clock, { signal });
 
 export const timeClockQueryOptions = () =>
   // The console tablet stays open all day: a fresh look each minute keeps "sessions now" current.

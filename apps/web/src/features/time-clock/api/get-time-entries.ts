@@ -1,14 +1,12 @@
 import { keepPreviousData, queryOptions, useQuery } from "@tanstack/react-query";
-import { z } from "zod";
-import { timeEntryDto } from "@takeup/domain";
-import { api } from "../../../lib/api-client.ts";
+import { timeClockRoutes } from "@takeup/domain";
+import { callApi } from "../../../lib/api-client.ts";
 import { timeClockKeys, type TimeEntriesParams } from "./time-clock-keys.ts";
 
 /** Entries that start on the studio workdays from `from` to `to` (both included); an engineer gets their own. */
 export function getTimeEntries(params: TimeEntriesParams, signal?: AbortSignal) {
-  const query = new URLSearchParams({ from: params.from, to: params.to });
-  if (params.staffUserId) query.set("staffUserId", params.staffUserId);
-  return api.get(`/api/time-entries?${query.toString()}`, z.array(timeEntryDto), signal);
+  const query = { from: params.from, to: params.to, staffUserId: params.staffUserId || undefined };
+  return callApi(timeClockRoutes.entries, { query, signal });
 }
 
 export const timeEntriesQueryOptions = (params: TimeEntriesParams) =>

@@ -1,10 +1,10 @@
 import { useMutation, useQueryClient } from "@tanstack/react-query";
-import { timeEntryEditDto, type ProposeEditInput } from "@takeup/domain";
-import { api } from "../../../lib/api-client.ts";
+import { timeClockRoutes, type ProposeEditInput } from "@takeup/domain";
+import { callApi } from "../../../lib/api-client.ts";
 import { timeClockKeys } from "./time-clock-keys.ts";
 
 /** A correction to an entry, or missing time (no timeEntryId); nothing changes until a manager approves. */
-export const proposeEdit = (input: ProposeEditInput) => api.post("/api/time-entry-edits", input, timeEntryEditDto);
+export const proposeEdit = (input: ProposeEditInput) => callApi(timeClockRoutes.proposeEdit, { body: input });
 
 export function useProposeEdit() {
   const queryClient = useQueryClient();

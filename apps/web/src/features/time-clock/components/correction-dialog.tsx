@@ -10,7 +10,6 @@ import { Input } from "../../../components/ui/input.tsx";
 import { Select } from "../../../components/ui/select.tsx";
 import { Textarea } from "../../../components/ui/textarea.tsx";
 import { useToast } from "../../../components/ui/use-toast.ts";
-import { ApiError } from "../../../lib/api-client.ts";
 import { applyApiErrors } from "../../../lib/form-errors.ts";
 import { formatDayShort, formatTimeRange, studioLocalDateTimeToIso, studioParts } from "../../../lib/studio-time.ts";
 import { useSessionsAround } from "../api/get-sessions-around.ts";
@@ -92,18 +91,14 @@ const fields = ["start", "end", "breaks", "session", "reason"] as const;
 const SHOP = "shop";
 
 /** The API names the contract's fields; the form shows them under its own. */
-function inFormTerms(error: unknown): unknown {
-  if (!(error instanceof ApiError)) return error;
-  const rename = (field: string) =>
-    field
-      .replace(/^startedAt$/, "start")
-      .replace(/^endedAt$/, "end")
-      .replace(/^breaks\.(\d+)\.startedAt$/, "breaks.$1.from")
-      .replace(/^breaks\.(\d+)\.endedAt$/, "breaks.$1.to")
-      .replace(/^breaks\.(\d+)$/, "breaks.$1.from")
-      .replace(/^bookingId$/, "session");
-  return new ApiError(error.status, error.code, error.message, error.details.map((d) => ({ ...d, field: rename(d.field) })));
-}
+const fromApiField = (field: string): string =>
+  field
+    .replace(/^startedAt$/, "start")
+    .replace(/^endedAt$/, "end")
+    .replace(/^breaks\.(\d+)\.startedAt$/, "breaks.$1.from")
+    .replace(/^breaks\.(\d+)\.endedAt$/, "breaks.$1.to")
+    .replace(/^breaks\.(\d+)$/, "breaks.$1.from")
+    .replace(/^bookingId$/, "session");
 
 function defaults(entry: TimeEntryDto | undefined, timeZone: string): CorrectionValues {
   const closed = entry?.breaks.filter((b): b is { id: number; startedAt: string; endedAt: string } => b.endedAt !== null) ?? [];
@@ -148,7 +143,7 @@ function CorrectionForm({ entry, staffUserId, timeZone, onDone, onCancel }: Corr
         onDone();
       },
       onError: (error) => {
-        const message = applyApiErrors(inFormTerms(error), setError, { fields });
+        const message = applyApiErrors(error, setError, { fields, fromApiField });
         setFormError(message ? inStudioTime(message, timeZone) : null);
       },
     });

@@ -1,11 +1,7 @@
+import { formatDuration } from "@takeup/domain";
+
 /** Worked time as people say it: 3 h 12 min, 41 h 30 min, 8 h, 45 min. */
-export function formatWorked(minutes: number): string {
-  const total = Math.max(0, Math.round(minutes));
-  const hours = Math.floor(total / 60);
-  const rest = total % 60;
-  if (hours === 0) return `${rest} min`;
-  return rest === 0 ? `${hours} h` : `${hours} h ${rest} min`;
-}
+export const formatWorked = (minutes: number): string => formatDuration(Math.max(0, Math.round(minutes)));
 
 /** Minutes between two instants, less the breaks inside, up to `now` for anything still running. */
 export function workedMinutesSoFar(

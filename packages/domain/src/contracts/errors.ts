@@ -1,0 +1,83 @@
+/**
+ * Every `code` the API may put in `{"error":{code,message,details?}}`, in one place: `HttpError`
+ * takes only these, so a new code is added here (and shows in the OpenAPI document's Error schema)
+ * before a service can throw it. The web may match on them without guessing.
+ */
+export const apiErrorCodes = [
+  // Requests the API cannot read or will not take from this caller.
+  "bad_path",
+  "malformed_json",
+  "unreadable_body",
+  "body_too_large",
+  "unsupported_charset",
+  "unsupported_encoding",
+  "invalid_input",
+  "cross_site_request",
+  "signed_out",
+  "forbidden",
+  "not_found",
+  "already_exists",
+  "busy",
+  // Sign-in, invitations and accounts.
+  "invalid_credentials",
+  "invalid_reset_token",
+  "too_many_attempts",
+  "account_deactivated",
+  "no_role",
+  "invitation_not_found",
+  "invitation_used",
+  "invitation_broken",
+  "email_taken",
+  "last_owner",
+  // Clients, rooms, rates and equipment.
+  "client_exists",
+  "client_inactive",
+  "room_exists",
+  "room_inactive",
+  "invalid_rate_card",
+  "no_rate_card",
+  "no_engineer_rate",
+  "not_an_engineer",
+  "duplicate_engineer_rate",
+  "unknown_client",
+  "unknown_room",
+  "unknown_project",
+  "unknown_engineer",
+  "unknown_equipment",
+  "studio_not_set_up",
+  // Bookings.
+  "invalid_booking",
+  "booking_conflict",
+  "booking_closed",
+  "booking_cancelled",
+  "second_hold",
+  "invalid_transition",
+  "not_session_time",
+  "not_on_booking",
+  "session_not_confirmed",
+  "feed_not_found",
+  // Time and payroll.
+  "already_clocked_in",
+  "not_clocked_in",
+  "already_on_break",
+  "not_on_break",
+  "entry_open",
+  "entry_overlap",
+  "edit_pending",
+  "edit_decided",
+  "edits_pending",
+  "own_time",
+  "owner_time",
+  "period_locked",
+  "duplicate_pay_rate",
+  "rate_used_by_locked_period",
+  "payroll_unresolvable",
+  // Development tools.
+  "mail_catcher_off",
+  "mail_catcher_down",
+  // The server's own trouble.
+  "contract_drift",
+  "database_unavailable",
+  "internal_error",
+] as const;
+export type ApiErrorCode = (typeof apiErrorCodes)[number];
