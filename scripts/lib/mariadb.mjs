@@ -41,7 +41,9 @@ const ownerFile = (port) => `${root}/.tmp/mariadb-${port}.pid`;
 async function stopLeftoverServer(port) {
   const file = ownerFile(port);
   if (!existsSync(file)) return;
-  const pid = Number(readFileSync(file, "utf8").trim());
+  const [pid, ownerPid] = readFileSync(file, "utf8").trim().split(" ").map(Number);
+  // Still in use by a run that is alive (on this port by mistake): not ours to stop.
+  if (ownerPid > 0 && ownerPid !== process.pid && pidAlive(ownerPid)) return;
   rmSync(file, { force: true });
   if (!(pid > 0) || !pidAlive(pid)) return;
   let commandLine = "";
@@ -53,7 +55,7 @@ async function stopLeftoverServer(port) {
   if (!commandLine.includes("mariadbd") || !commandLine.includes(`--port=${port} `)) return;
   log(`stopping a MariaDB left running on port ${port} by an earlier run that was killed (pid ${pid})`);
   process.kill(pid, "SIGTERM");
-  await waitFor("the left-over MariaDB to exit", () => !pidAlive(pid), 30000);
+  await waitFor("the left-over MariaDB to exit", () => !pidAlive(pid), 120000);
   // A test run's throw-away data directory goes with it.
   const leftoverDir = commandLine.match(/--datadir=(\/tmp\/takeup-test-db-[^/\s]+)\/data /)?.[1];
   if (leftoverDir) rmSync(leftoverDir, { recursive: true, force: true });
@@ -116,7 +118,7 @@ export async function startMariaDb({ dir, port, database }) {
     server.unref();
     startedHere = true;
     mkdirSync(`${root}/.tmp`, { recursive: true });
-    writeFileSync(ownerFile(port), String(server.pid));
+    writeFileSync(ownerFile(port), `${server.pid} ${process.pid}`);
     let exited = false;
     server.once("exit", () => (exited = true));
     try {
