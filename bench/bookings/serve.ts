@@ -9,6 +9,7 @@ import express from "express";
 import mysql from "mysql2/promise";
 import { createDb } from "@takeup/db";
 import { createApp } from "../../apps/api/src/app.ts";
+import { discardingMailer } from "../../apps/api/src/lib/mailer.ts";
 import { calendarWeekRows } from "./calendar-sql.ts";
 
 const target = process.argv[2];
@@ -29,7 +30,7 @@ if (target === "api") {
     db,
     config: { appUrl, authSecret: randomBytes(24).toString("hex"), smtpUrl: "smtp://127.0.0.1:9", mailFrom: "studio@takeup.test", trustProxy: false },
     // The calendar sends no mail; a mailer that drops everything keeps SMTP out of the numbers.
-    mailer: { send: async () => {}, close() {} },
+    mailer: discardingMailer,
   });
   server.on("request", app);
   closeDb = () => pool.end();

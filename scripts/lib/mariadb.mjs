@@ -1,6 +1,6 @@
 // A private MariaDB instance on loopback, from Debian's package, with its data under the repo.
 import { spawn, spawnSync } from "node:child_process";
-import { copyFileSync, existsSync, mkdirSync, readFileSync, writeFileSync, openSync } from "node:fs";
+import { copyFileSync, existsSync, mkdirSync, readFileSync, rmSync, writeFileSync, openSync } from "node:fs";
 import { randomBytes } from "node:crypto";
 import { ensureDebianPackage, log, root, StartupFailure, waitFor, which } from "./proc.mjs";
 
@@ -29,6 +29,36 @@ function readPid(dir) {
   if (!existsSync(file)) return null;
   const pid = Number(readFileSync(file, "utf8").trim());
   return pid > 0 && pidAlive(pid) ? pid : null;
+}
+
+/** Where we note which server we started on a port, so a run that was killed can be cleaned up after. */
+const ownerFile = (port) => `${root}/.tmp/mariadb-${port}.pid`;
+
+/**
+ * A run killed outright (SIGKILL, a closed pipe) cannot stop its server: the next run on the same
+ * port finds the pid we noted, checks it is still a mariadbd on that port, and stops it.
+ */
+async function stopLeftoverServer(port) {
+  const file = ownerFile(port);
+  if (!existsSync(file)) return;
+  const [pid, ownerPid] = readFileSync(file, "utf8").trim().split(" ").map(Number);
+  // Still in use by a run that is alive (on this port by mistake): not ours to stop.
+  if (ownerPid > 0 && ownerPid !== process.pid && pidAlive(ownerPid)) return;
+  rmSync(file, { force: true });
+  if (!(pid > 0) || !pidAlive(pid)) return;
+  let commandLine = "";
+  try {
+    commandLine = readFileSync(`/proc/${pid}/cmdline`, "utf8").replaceAll("\0", " ");
+  } catch {
+    return;
+  }
+  if (!commandLine.includes("mariadbd") || !commandLine.includes(`--port=${port} `)) return;
+  log(`stopping a MariaDB left running on port ${port} by an earlier run that was killed (pid ${pid})`);
+  process.kill(pid, "SIGTERM");
+  await waitFor("the left-over MariaDB to exit", () => !pidAlive(pid), 120000);
+  // A test run's throw-away data directory goes with it.
+  const leftoverDir = commandLine.match(/--datadir=(\/tmp\/takeup-test-db-[^/\s]+)\/data /)?.[1];
+  if (leftoverDir) rmSync(leftoverDir, { recursive: true, force: true });
 }
 
 /**
@@ -60,6 +90,7 @@ export async function startMariaDb({ dir, port, database }) {
 
   let startedHere = false;
   if (!readPid(dir)) {
+    await stopLeftoverServer(port);
     const errLog = openSync(`${dir}/error.log`, "a");
     const server = spawn(
       which("mariadbd"),
@@ -86,6 +117,8 @@ export async function startMariaDb({ dir, port, database }) {
     );
     server.unref();
     startedHere = true;
+    mkdirSync(`${root}/.tmp`, { recursive: true });
+    writeFileSync(ownerFile(port), `${server.pid} ${process.pid}`);
     let exited = false;
     server.once("exit", () => (exited = true));
     try {
@@ -129,6 +162,7 @@ export async function startMariaDb({ dir, port, database }) {
       if (!pid) return;
       spawnSync(which("mariadb-admin"), ["--no-defaults", `--socket=${dir}/mysqld.sock`, "-uroot", "shutdown"]);
       await waitFor("MariaDB to exit", () => !pidAlive(pid), 30000);
+      rmSync(ownerFile(port), { force: true });
     },
   };
 }

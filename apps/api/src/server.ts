@@ -5,6 +5,7 @@ import { createMailer } from "./lib/mailer.ts";
 import { logger } from "./lib/logger.ts";
 import { loadStudio } from "./routes/studio/studio.service.ts";
 import { startScheduler } from "./lib/scheduler.ts";
+import { backgroundJobs } from "./jobs.ts";
 import { settleAfterResponseWork } from "./lib/after-response.ts";
 
 const { config, databaseUrl, port, host } = readConfig();
@@ -14,7 +15,7 @@ const { db, pool } = createDb(databaseUrl, {
 const mailer = createMailer(db, config.smtpUrl, config.mailFrom, async () => (await loadStudio(db)).name);
 const app = createApp({ db, config, mailer });
 
-const stopScheduler = startScheduler(db, mailer);
+const stopScheduler = startScheduler(db, mailer, backgroundJobs);
 const server = app.listen(port, host, () => logger.info("takeup api listening", { host, port, appUrl: config.appUrl }));
 
 let closing = false;

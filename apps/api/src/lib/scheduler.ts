@@ -1,59 +1,67 @@
-import { and, eq, gt, isNull, lte } from "drizzle-orm";
-import { bookings, type Db } from "@takeup/db";
+import { hostname } from "node:os";
+import { randomUUID } from "node:crypto";
+import { and, eq, lte } from "drizzle-orm";
+import { scheduledJobs, type Db } from "@takeup/db";
 import type { Mailer } from "./mailer.ts";
 import { logger } from "./logger.ts";
-import { SignInThrottle } from "./sign-in-throttle.ts";
-import { loadStudio } from "../routes/studio/studio.service.ts";
-import { expireLapsedHolds } from "../routes/bookings/holds.ts";
-import { loadBookingDtos } from "../routes/bookings/booking-dto.ts";
-import { clientRecipients, staffRecipients } from "../routes/bookings/recipients.ts";
-import { bookingReminderEmail, holdExpiringEmail } from "../emails/booking-emails.ts";
 
-const hour = 3_600_000;
+export type JobContext = { db: Db; mailer: Mailer; now: Date };
 
-/** Holds lapsing within 12 hours get one notice to the client and the studio managers. */
-export async function sendHoldNotices(db: Db, mailer: Mailer, now = new Date()) {
-  const studio = await loadStudio(db);
-  const due = await loadBookingDtos(db, and(eq(bookings.status, "hold"), isNull(bookings.queuedBehindId), isNull(bookings.holdNoticeSentAt), gt(bookings.holdExpiresAt, now), lte(bookings.holdExpiresAt, new Date(now.getTime() + 12 * hour))), 200);
-  for (const booking of due) {
-    const to = [...(await clientRecipients(db, booking.client.id)), ...(await staffRecipients(db, { roles: ["manager"] }))];
-    for (const r of to) await mailer.send(holdExpiringEmail({ studio, booking, to: r.email, name: r.name }));
-    await db.update(bookings).set({ holdNoticeSentAt: now }).where(eq(bookings.id, booking.id));
-  }
-  return due.length;
+/** A piece of background work that lives with its capability; the scheduler only decides when. */
+export type BackgroundJob = {
+  name: string;
+  /** How often it runs, across all API processes together. */
+  everyMs: number;
+  /** Does the work; returns how many things it handled (for the log). */
+  run(context: JobContext): Promise<number>;
+};
+
+/**
+ * Takes the job's due run for this process: one UPDATE moves `next_run_at` on only if it is due,
+ * so of several processes (or Galera nodes) ticking at once exactly one gets it (decision 017).
+ */
+export async function claimDueRun(db: Db, job: BackgroundJob, holder: string, now: Date): Promise<boolean> {
+  await db.insert(scheduledJobs).ignore().values({ name: job.name, nextRunAt: now });
+  const [result] = await db
+    .update(scheduledJobs)
+    .set({ nextRunAt: new Date(now.getTime() + job.everyMs), lastHolder: holder, lastStartedAt: now })
+    .where(and(eq(scheduledJobs.name, job.name), lte(scheduledJobs.nextRunAt, now)));
+  return result.affectedRows === 1;
 }
 
-/** Confirmed sessions starting within the next 24 hours get one reminder to the client and the engineers. */
-export async function sendReminders(db: Db, mailer: Mailer, now = new Date()) {
-  const studio = await loadStudio(db);
-  const due = await loadBookingDtos(db, and(eq(bookings.status, "confirmed"), isNull(bookings.reminderSentAt), gt(bookings.startsAt, now), lte(bookings.startsAt, new Date(now.getTime() + 24 * hour))), 200);
-  for (const booking of due) {
-    const to = [...(await clientRecipients(db, booking.client.id)), ...(await staffRecipients(db, { userIds: booking.engineers.map((e) => e.userId) }))];
-    for (const r of to) await mailer.send(bookingReminderEmail({ studio, booking, to: r.email, name: r.name }));
-    await db.update(bookings).set({ reminderSentAt: now }).where(eq(bookings.id, booking.id));
+/** Runs, in order, every job whose turn it is; a failing job is logged and the others still run. */
+export async function runDueJobs(db: Db, mailer: Mailer, jobs: readonly BackgroundJob[], holder: string, now = new Date()) {
+  const handled: Record<string, number> = {};
+  for (const job of jobs) {
+    if (!(await claimDueRun(db, job, holder, now))) continue;
+    try {
+      handled[job.name] = await job.run({ db, mailer, now });
+      await db.update(scheduledJobs).set({ lastFinishedAt: new Date(), lastResult: handled[job.name], lastError: null }).where(eq(scheduledJobs.name, job.name));
+    } catch (error) {
+      const reason = error instanceof Error ? error.message : String(error);
+      logger.error("scheduled job failed", { job: job.name, reason });
+      await db.update(scheduledJobs).set({ lastFinishedAt: new Date(), lastError: reason.slice(0, 2000) }).where(eq(scheduledJobs.name, job.name)).catch(() => {});
+    }
   }
-  return due.length;
+  return handled;
 }
 
-/** The API's background work: lapse holds, send notices and reminders, drop spent throttle counters, once a minute. */
-export function startScheduler(db: Db, mailer: Mailer, everyMs = 60_000) {
+/** Ticks every `tickMs` and runs the jobs that are due; returns a function that stops it. */
+export function startScheduler(db: Db, mailer: Mailer, jobs: readonly BackgroundJob[], tickMs = 15_000) {
+  const holder = `${hostname()}:${process.pid}:${randomUUID().slice(0, 8)}`;
   let running = false;
   const tick = async () => {
     if (running) return;
     running = true;
     try {
-      const studio = await loadStudio(db);
-      await expireLapsedHolds(db, studio);
-      await sendHoldNotices(db, mailer);
-      await sendReminders(db, mailer);
-      await new SignInThrottle(db).purgeExpired();
+      await runDueJobs(db, mailer, jobs, holder);
     } catch (error) {
       logger.error("scheduled work failed", { reason: error instanceof Error ? error.message : String(error) });
     } finally {
       running = false;
     }
   };
-  const timer = setInterval(() => void tick(), everyMs);
+  const timer = setInterval(() => void tick(), tickMs);
   void tick();
   return () => clearInterval(timer);
 }

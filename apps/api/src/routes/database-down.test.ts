@@ -4,6 +4,7 @@ import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import request from "supertest";
 import { createDb } from "@takeup/db";
 import { createApp } from "../app.ts";
+import { discardingMailer } from "../lib/mailer.ts";
 import { appUrl, createTestApp, type TestApp } from "../test/harness.ts";
 import { demo } from "../test/demo.ts";
 
@@ -18,7 +19,7 @@ afterAll(() => t.close());
 
 /** The same app and secret as the test app's, on a database handle the test controls. */
 function appOn(db: ReturnType<typeof createDb>["db"]) {
-  return createApp({ db, config: t.config, mailer: { send: async () => {}, close: () => {} } });
+  return createApp({ db, config: t.config, mailer: discardingMailer });
 }
 
 const concrete = (fullPath: string) => fullPath.replace(/:(\w+)/g, (_, name: string) => (name === "token" ? "a".repeat(43) : name === "userId" ? "someone" : "1"));

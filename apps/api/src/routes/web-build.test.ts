@@ -8,6 +8,7 @@ import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import request from "supertest";
 import { createDb } from "@takeup/db";
 import { createApp } from "../app.ts";
+import { discardingMailer } from "../lib/mailer.ts";
 
 let dist: string;
 let app: ReturnType<typeof createApp>;
@@ -25,7 +26,7 @@ beforeAll(() => {
   app = createApp({
     db: handle.db,
     config: { appUrl: "http://localhost:3100", authSecret: "x".repeat(32), smtpUrl: "smtp://127.0.0.1:1", mailFrom: "a@b.test", trustProxy: false, webDist: dist },
-    mailer: { send: async () => {}, close: () => {} },
+    mailer: discardingMailer,
   });
 });
 afterAll(async () => {

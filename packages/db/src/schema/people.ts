@@ -15,6 +15,8 @@ export const staffProfiles = mysqlTable("staff_profiles", {
   active: boolean("active").notNull().default(true),
   createdAt: createdAt(),
   updatedAt: updatedAt(),
+  /** Bumped by every booking write that checks this resource for overlaps: a write, so Galera certifies two such transactions against each other (decision 017). */
+  lockVersion: int("lock_version", { unsigned: true }).notNull().default(0),
 });
 
 /** A band, producer or label the studio works for. */

@@ -16,6 +16,8 @@ export const rooms = mysqlTable("rooms", {
   active: boolean("active").notNull().default(true),
   createdAt: createdAt(),
   updatedAt: updatedAt(),
+  /** Bumped by every booking write that checks this resource for overlaps: a write, so Galera certifies two such transactions against each other (decision 017). */
+  lockVersion: int("lock_version", { unsigned: true }).notNull().default(0),
 });
 
 /** A bookable piece of kit; it lives in a room but can be booked into another room's session. */
@@ -33,6 +35,8 @@ export const equipment = mysqlTable("equipment", {
   active: boolean("active").notNull().default(true),
   createdAt: createdAt(),
   updatedAt: updatedAt(),
+  /** Bumped by every booking write that checks this resource for overlaps: a write, so Galera certifies two such transactions against each other (decision 017). */
+  lockVersion: int("lock_version", { unsigned: true }).notNull().default(0),
 });
 
 /** One version of a room's prices. A new change is a new row; bookings point at the row they were quoted on. */

@@ -1,4 +1,4 @@
-import { and, asc, eq, gt, gte, inArray, isNull, lt, ne, or, type SQL } from "drizzle-orm";
+import { and, asc, eq, gt, gte, inArray, isNull, lt, ne, or, sql, type SQL } from "drizzle-orm";
 import {
   bookingEngineers,
   bookingEquipment,
@@ -44,6 +44,13 @@ type Window = { startsAt: Date; endsAt: Date };
  * instead of deadlocking. Call before findConflicts, inside a READ COMMITTED transaction.
  */
 export async function lockResources(tx: Tx, resources: Resources) {
+  // A write before the read: on one server the UPDATE takes the row lock as FOR UPDATE would; on a
+  // Galera cluster, where a lock taken on one node does not stop a writer on another, two bookings
+  // that bumped the same row cannot both commit (the loser gets 1213 and is retried, decision 017).
+  // Raw SQL so the rows' updated_at keeps meaning "edited by someone".
+  await tx.execute(sql`UPDATE ${rooms} SET lock_version = lock_version + 1 WHERE id = ${resources.roomId}`);
+  if (resources.equipmentIds.length) await tx.execute(sql`UPDATE ${equipment} SET lock_version = lock_version + 1 WHERE id IN (${sql.join([...resources.equipmentIds].sort((a, b) => a - b), sql`, `)}) ORDER BY id`);
+  if (resources.engineerIds.length) await tx.execute(sql`UPDATE ${staffProfiles} SET lock_version = lock_version + 1 WHERE user_id IN (${sql.join([...resources.engineerIds].sort(), sql`, `)}) ORDER BY user_id`);
   const [room] = await tx.select().from(rooms).where(eq(rooms.id, resources.roomId)).for("update");
   const kit = resources.equipmentIds.length
     ? await tx.select().from(equipment).where(inArray(equipment.id, resources.equipmentIds)).orderBy(asc(equipment.id)).for("update")

@@ -2,6 +2,7 @@ import { describe, expect, it } from "vitest";
 import request from "supertest";
 import { createDb } from "@takeup/db";
 import { createApp } from "../../app.ts";
+import { discardingMailer } from "../../lib/mailer.ts";
 import { createTestApp } from "../../test/harness.ts";
 
 describe("GET /api/health", () => {
@@ -18,7 +19,7 @@ describe("GET /api/health", () => {
     const app = createApp({
       db,
       config: { appUrl: "http://localhost:3100", authSecret: "x".repeat(32), smtpUrl: "smtp://127.0.0.1:1", mailFrom: "a@b.test", trustProxy: false },
-      mailer: { send: async () => {}, close: () => {} },
+      mailer: discardingMailer,
     });
     const response = await request(app).get("/api/health");
     expect(response.status).toBe(503);
