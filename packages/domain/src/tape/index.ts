@@ -1,0 +1,3 @@
+export * from "./moving-average.ts";
+export * from "./price.ts";
+export * from "./planner.ts";
