@@ -34,7 +34,8 @@ export async function createTestApp(options: { throttlePolicy?: Partial<Throttle
   url.pathname = `/${name}`;
   await migrateDatabase(url.toString());
   const { db, pool } = createDb(url.toString(), { connectionLimit: 60 });
-  if (options.seed !== false) await seedDemo(db);
+  const uploadsDir = await mkdtemp(path.join(os.tmpdir(), "takeup-uploads-"));
+  if (options.seed !== false) await seedDemo(db, { uploadsDir });
 
   const catcher = await startMailCatcher({ smtpPort: 0, httpPort: 0 });
   const config: AppConfig = {
@@ -44,7 +45,7 @@ export async function createTestApp(options: { throttlePolicy?: Partial<Throttle
     mailFrom: "studio@takeup.test",
     mailCatcherUrl: `http://127.0.0.1:${catcher.httpPort}`,
     trustProxy: false,
-    uploadsDir: await mkdtemp(path.join(os.tmpdir(), "takeup-uploads-")),
+    uploadsDir,
   };
   const mailer = createMailer(db, config.smtpUrl, config.mailFrom, async () => "Wrenfield Sound");
   const app = createApp({ db, config, mailer, throttlePolicy: options.throttlePolicy });

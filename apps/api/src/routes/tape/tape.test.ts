@@ -271,6 +271,21 @@ describe("selling, returning and counting stock", () => {
   });
 });
 
+describe("the demo studio's tape", () => {
+  it("holds the four demo products with stock, a receipt PDF to download, and the 1/2-inch tape flagged for reorder", async () => {
+    const products = (await manager.get("/api/tape/products")).body as { sku: string; id: number; onHand: number; lowStock: boolean }[];
+    const demoSkus = products.filter((p) => p.sku.startsWith("WS-"));
+    expect(demoSkus.map((p) => p.sku).sort()).toEqual(["WS-T12-2500", "WS-T14-1200", "WS-T14-2500", "WS-T2-2500"]);
+    const half = demoSkus.find((p) => p.sku === "WS-T12-2500")!;
+    expect(half).toMatchObject({ onHand: 3, lowStock: true });
+    const history = (await manager.get(`/api/tape/products/${half.id}/movements`)).body as { id: number; kind: string }[];
+    const receiptRow = history.find((m) => m.kind === "receipt")!;
+    const file = await manager.get(`/api/tape/movements/${receiptRow.id}/receipt`);
+    expect(file.status).toBe(200);
+    expect(file.headers["content-type"]).toBe("application/pdf");
+  });
+});
+
 describe("low-stock e-mail to managers", () => {
   it("sends one e-mail per crossing below the reorder point, even when two runs race, and again only after a new crossing", async () => {
     const { id } = await newProduct({ reorderPoint: 2, sku: "LOW-1" });
