@@ -65,7 +65,7 @@ export function TapeStockRoute() {
     <>
       {header}
       <TapeStockTable products={products.data} currency={currency} canMoveStock={mover} onReceive={onReceive} onSell={onSell} onHistory={onHistory} />
-      {open?.kind === "receive" ? <ReceiveTapeDialog product={open.product} onClose={close} today={studioToday(studio.data.timeZone)} /> : null}
+      {open?.kind === "receive" ? <ReceiveTapeDialog product={open.product} currency={currency} onClose={close} today={studioToday(studio.data.timeZone)} /> : null}
       {open?.kind === "sell" ? <SellTapeDialog product={open.product} currency={currency} onClose={close} /> : null}
       {open?.kind === "history" ? <MovementHistoryDialog product={open.product} currency={currency} onClose={close} /> : null}
       {open?.kind === "count" ? <CountSheetDialog products={products.data.filter((p) => p.active)} onClose={close} /> : null}

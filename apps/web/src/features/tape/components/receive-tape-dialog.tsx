@@ -2,7 +2,7 @@ import { useState } from "react";
 import { useForm } from "react-hook-form";
 import { zodResolver } from "@hookform/resolvers/zod";
 import { z } from "zod";
-import type { TapeProductDto } from "@takeup/domain";
+import type { TapeMovementDto, TapeProductDto } from "@takeup/domain";
 import { Button } from "../../../components/ui/button.tsx";
 import { Dialog, DialogActions } from "../../../components/ui/dialog.tsx";
 import { FormAlert, FormField } from "../../../components/ui/form-field.tsx";
@@ -10,6 +10,7 @@ import { Input } from "../../../components/ui/input.tsx";
 import { useToast } from "../../../components/ui/use-toast.ts";
 import { applyApiErrors } from "../../../lib/form-errors.ts";
 import { useReceiveTape } from "../api/receive-tape.ts";
+import { money } from "./tape-format.ts";
 
 const maxBytes = 10 * 1024 * 1024;
 const receiveForm = z.object({
@@ -25,8 +26,9 @@ type ReceiveFormValues = z.infer<typeof receiveForm>;
 const fields = ["quantity", "unitCost", "supplier", "receivedOn", "file"] as const;
 const cents = (text: string) => String(Math.round(Number(text) * 100));
 
-export function ReceiveTapeDialog({ product, onClose, today }: { product: TapeProductDto; onClose: () => void; today: string }) {
+export function ReceiveTapeDialog({ product, currency, onClose, today }: { product: TapeProductDto; currency: string; onClose: () => void; today: string }) {
   const toast = useToast();
+  const [done, setDone] = useState<TapeMovementDto | null>(null);
   const [progress, setProgress] = useState<number | null>(null);
   const [formError, setFormError] = useState<string | null>(null);
   const receive = useReceiveTape(product.id, setProgress);
@@ -40,13 +42,28 @@ export function ReceiveTapeDialog({ product, onClose, today }: { product: TapePr
     try {
       const movement = await receive.mutateAsync({ quantity: values.quantity, unitCostCents: cents(values.unitCost), supplier: values.supplier, receivedOn: values.receivedOn, file: values.file[0]! });
       toast(`${movement.quantity} × ${product.name} received; ${movement.onHandAfter} on hand`);
-      onClose();
+      setDone(movement);
     } catch (error) {
       setProgress(null);
       setFormError(applyApiErrors(error, setError, { fields, codeFields: { unsupported_file_type: "file", file_too_large: "file", insufficient_stock: "quantity" } }));
     }
   });
   const { errors } = formState;
+  if (done) {
+    return (
+      <Dialog open onClose={onClose} title={`Receive ${product.name}`}>
+        <div className="flex flex-col gap-3" role="status">
+          <UploadProgress fraction={1} />
+          <p>
+            Received {done.quantity} reel{done.quantity === 1 ? "" : "s"} from {done.supplier}: now {done.onHandAfter} on hand at an average cost of {money(done.averageCostAfterCents, currency)}.
+          </p>
+          <DialogActions>
+            <Button onClick={onClose}>Close</Button>
+          </DialogActions>
+        </div>
+      </Dialog>
+    );
+  }
   return (
     <Dialog open onClose={onClose} title={`Receive ${product.name}`} description="Record a delivery at its unit cost with the supplier's receipt (PDF, PNG or JPEG, up to 10 MB).">
       <form onSubmit={submit} noValidate className="flex flex-col gap-4">
@@ -68,12 +85,7 @@ export function ReceiveTapeDialog({ product, onClose, today }: { product: TapePr
         <FormField label="Receipt" error={errors.file?.message} hint="PDF, PNG or JPEG, up to 10 MB">
           {(field) => <Input {...field} {...register("file")} type="file" accept="application/pdf,image/png,image/jpeg" />}
         </FormField>
-        {progress !== null ? (
-          <div className="flex items-center gap-3">
-            <progress className="h-2 w-full accent-rust" max={1} value={progress} aria-label="Upload progress" />
-            <span className="text-sm tabular-nums text-muted">{Math.round(progress * 100)} %</span>
-          </div>
-        ) : null}
+        {progress !== null ? <UploadProgress fraction={progress} /> : null}
         <DialogActions>
           <Button variant="secondary" onClick={onClose}>
             Cancel
@@ -84,5 +96,14 @@ export function ReceiveTapeDialog({ product, onClose, today }: { product: TapePr
         </DialogActions>
       </form>
     </Dialog>
+  );
+}
+
+function UploadProgress({ fraction }: { fraction: number }) {
+  return (
+    <div className="flex items-center gap-3">
+      <progress className="h-2 w-full accent-rust" max={1} value={fraction} aria-label="Receipt upload" />
+      <span className="text-sm tabular-nums text-muted">{Math.round(fraction * 100)} % uploaded</span>
+    </div>
   );
 }
