@@ -30,7 +30,7 @@ describe("tape stock", () => {
     await receive.getByRole("button", { name: "Receive stock" }).click();
     await expect.poll(() => receive.getByText("100 % uploaded").count()).toBe(1);
     await expect.poll(() => receive.getByText(`now ${before + 5} on hand`).count()).toBe(1);
-    await receive.getByRole("button", { name: "Close" }).click();
+    await receive.getByRole("button", { name: "Done" }).click();
     await expect.poll(() => onHandIn(page)).toBe(before + 5);
     expect(await averageIn(page)).not.toBe(averageBefore);
 

@@ -58,7 +58,7 @@ export function ReceiveTapeDialog({ product, currency, onClose, today }: { produ
             Received {done.quantity} reel{done.quantity === 1 ? "" : "s"} from {done.supplier}: now {done.onHandAfter} on hand at an average cost of {money(done.averageCostAfterCents, currency)}.
           </p>
           <DialogActions>
-            <Button onClick={onClose}>Close</Button>
+            <Button onClick={onClose}>Done</Button>
           </DialogActions>
         </div>
       </Dialog>
