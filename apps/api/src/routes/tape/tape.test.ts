@@ -306,6 +306,48 @@ describe("low-stock e-mail to managers", () => {
   });
 });
 
+describe("malformed payloads on every tape write", () => {
+  it("answers 1,000 generated malformed payloads per mutating tape route without a 5xx (fast-check, fixed seed)", async () => {
+    const { id } = await newProduct();
+    await receipt(id, 5, 1000);
+    const junk = fc.oneof(
+      fc.anything({ maxDepth: 2 }),
+      fc.constantFrom(null, -1, 0, 1.5, 2 ** 53, 1e308, "", "\ud800", "x".repeat(600), [], {}),
+      fc.integer({ min: -5, max: 200_000 }),
+      fc.string({ maxLength: 20 }),
+    );
+    const shaped = (keys: string[]) => fc.dictionary(fc.constantFrom(...keys, "extra"), junk, { maxKeys: keys.length + 1 });
+    const routes: [string, string[]][] = [
+      ["/api/tape/products", ["sku", "name", "widthInches", "lengthFt", "reelInches", "priceMode", "fixedPriceCents", "markupBp", "reorderPoint"]],
+      [`/api/tape/products/${id}/sales`, ["quantity", "clientAccountId", "projectId", "bookingId", "unitPriceCents"]],
+      [`/api/tape/products/${id}/returns`, ["quantity", "clientAccountId", "projectId", "bookingId", "reason"]],
+      [`/api/tape/products/${id}/adjustments`, ["quantity", "reason"]],
+      [`/api/tape/products/${id}/write-offs`, ["quantity", "reason"]],
+      ["/api/tape/counts", ["lines", "reason"]],
+      ["/api/tape/plan", ["songs", "speedIps", "reelLengthFt", "allowanceMinutes", "recorderId", "productId"]],
+      [`/api/tape/products/${id}`, ["sku", "name", "active", "reorderPoint", "markupBp"]],
+      [`/api/tape/products/${id}/receipts`, ["quantity", "unitCostCents", "supplier", "receivedOn"]],
+    ];
+    const failures: string[] = [];
+    let sent = 0;
+    for (const [index, [path, keys]] of routes.entries()) {
+      const payloads = fc.sample(fc.oneof({ arbitrary: shaped(keys), weight: 4 }, { arbitrary: junk, weight: 1 }), { seed: 20261202 + index, numRuns: 1000 });
+      const method = path === `/api/tape/products/${id}` ? "patch" : "post";
+      for (let i = 0; i < payloads.length; i += 10) {
+        await Promise.all(
+          payloads.slice(i, i + 10).map(async (payload) => {
+            const response = await owner[method](path).set("content-type", "application/json").send(JSON.stringify(payload) ?? "null");
+            sent++;
+            if (response.status >= 500) failures.push(`${method.toUpperCase()} ${path} ${JSON.stringify(payload)?.slice(0, 160)} → ${response.status} ${JSON.stringify(response.body).slice(0, 160)}`);
+          }),
+        );
+      }
+    }
+    expect(sent).toBe(routes.length * 1000);
+    expect(failures).toEqual([]);
+  }, 600_000);
+});
+
 describe("the tape planner", () => {
   it("plans reels for any staff role and prices them at today's price", async () => {
     const { id } = await newProduct();
