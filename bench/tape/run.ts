@@ -2,6 +2,7 @@
 // them (on hand and average cost are kept on the product row, so the read never touches the
 // movements), and the planner for 500 songs × 5 takes.
 // `npx tsx bench/tape/run.ts [--movements=1000000] [--products=200] [--no-doc]`.
+import os from "node:os";
 import { asc, desc } from "drizzle-orm";
 import type { RowDataPacket } from "mysql2/promise";
 import { createDb, tapeProducts } from "@takeup/db";
@@ -80,7 +81,7 @@ async function main({ startServer }: BenchContext) {
           `| stock screen query (200 runs) | p95 < 20 ms | ${ms(stock.p50)} | ${ms(stock.p95)} | ${ms(stock.max)} |`,
           `| planner, 500 songs × 5 takes at 15 in/s on 2500 ft (${plan.reelsNeeded} reels; 50 runs) | < 50 ms | ${ms(planner.p50)} | ${ms(planner.p95)} | ${ms(planner.max)} |`,
           "",
-          `Machine: ${machine.cpus}, ${machine.memory}, ${machine.os}, Node ${machine.node}, MariaDB ${String(server!.version)}; ${new Date().toISOString().slice(0, 10)}.`,
+          `Machine: ${machine.cpus}, ${machine.memory}, ${machine.os}, Node ${machine.node}, MariaDB ${String(server!.version)}; load average ${os.loadavg()[0]!.toFixed(1)} during the run (other work shared the cores); ${new Date().toISOString().slice(0, 10)}.`,
         ].join("\n"),
       );
     }

@@ -114,6 +114,24 @@ describe("properties of every plan ([D] from first-fit decreasing)", () => {
     );
   });
 
+  it("lays takes out exactly as a plain first-fit decreasing scan would", () => {
+    fc.assert(
+      fc.property(inputArb.filter(fits), (input) => {
+        const capacity = usableMinutes(input.reelLengthFt, input.speedIps, input.allowanceMinutes);
+        const takes = input.songs.flatMap((s) => Array.from({ length: s.takes }, () => s.minutes)).sort((a, b) => b - a);
+        const used: number[] = [];
+        for (const take of takes) {
+          const at = used.findIndex((u) => u + take <= capacity + 1e-9);
+          if (at >= 0) used[at]! += take;
+          else used.push(take);
+        }
+        const plan = planTape(input);
+        expect(plan.reels.map((r) => r.minutesUsed)).toEqual(used.map((u) => Math.round(u * 100) / 100));
+      }),
+      { numRuns: 300 },
+    );
+  });
+
   it("places every take exactly once", () => {
     fc.assert(
       fc.property(inputArb.filter(fits), (input) => {

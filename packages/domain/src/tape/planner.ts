@@ -76,15 +76,21 @@ function layOut(songs: PlanSong[], capacity: number, speedIps: number): { reels:
   const takes: Take[] = songs.flatMap((song, i) => Array.from({ length: song.takes }, () => ({ song: i, minutes: song.minutes })));
   // Stable sort: equal takes keep the songs' order.
   takes.sort((a, b) => b.minutes - a.minutes);
+  // First fit through a max-tree of the room left on each reel (reels not yet opened have a whole
+  // reel's room), so finding the leftmost reel with room costs log(reels), not a scan.
+  let size = 1;
+  while (size < Math.max(1, takes.length)) size *= 2;
+  const room = new Float64Array(2 * size).fill(capacity);
   const reels: { takes: Take[]; used: number }[] = [];
   for (const take of takes) {
-    const reel = reels.find((r) => r.used + take.minutes <= capacity + slack);
-    if (reel) {
-      reel.takes.push(take);
-      reel.used += take.minutes;
-    } else {
-      reels.push({ takes: [take], used: take.minutes });
-    }
+    let node = 1;
+    while (node < size) node = room[2 * node]! + slack >= take.minutes ? 2 * node : 2 * node + 1;
+    const index = node - size;
+    const reel = (reels[index] ??= { takes: [], used: 0 });
+    reel.takes.push(take);
+    reel.used += take.minutes;
+    room[node] = capacity - reel.used;
+    for (node >>= 1; node >= 1; node >>= 1) room[node] = Math.max(room[2 * node]!, room[2 * node + 1]!);
   }
   return { reels };
 }
