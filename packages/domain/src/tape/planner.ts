@@ -6,7 +6,7 @@
  * Takes are laid out first-fit decreasing: longest take first, each onto the first reel with
  * room, a new reel when none has room; no take is ever split across reels. First-fit
  * decreasing is not always optimal, but it never uses more than 11/9 × the optimum + 6/9 reels
- * (Dósa 2007), and never fewer than the total time ÷ the usable time per reel, rounded up.
+ * (Dósa 2007, from memory), and never fewer than the total time ÷ the usable time per reel, rounded up.
  */
 
 /** Speeds a studio tape recorder commonly runs at, in inches per second. */
