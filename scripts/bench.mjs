@@ -1,4 +1,4 @@
-// npm run bench: runs every benchmark in bench/ (today: bookings, then payroll) and leaves nothing behind.
+// npm run bench: runs every benchmark in bench/ (today: bookings, payroll, then tape) and leaves nothing behind.
 // Each benchmark gets a fresh temp dir for its private MariaDB; whatever way the benchmark
 // ends (success, error, Ctrl-C, a crash), this script stops that server and removes the dir.
 import { spawn, spawnSync } from "node:child_process";
@@ -8,7 +8,7 @@ import os from "node:os";
 import path from "node:path";
 import { log, root, which } from "./lib/proc.mjs";
 
-const benchmarks = ["bench/bookings/run.ts", "bench/payroll/run.ts"];
+const benchmarks = ["bench/bookings/run.ts", "bench/payroll/run.ts", "bench/tape/run.ts"];
 const passThrough = process.argv.slice(2);
 
 function alive(pid) {

@@ -14,7 +14,11 @@ export type AppConfig = {
   trustProxy: boolean;
   /** Parse every answer against its route contract (on by default under NODE_ENV=test). */
   checkResponses?: boolean;
+  /** Where uploaded files (tape receipts) are kept, outside the web root; `.data/uploads` by default. */
+  uploadsDir?: string;
 };
+
+export const defaultUploadsDir = () => path.join(repoRoot, ".data/uploads");
 
 const repoRoot = path.resolve(path.dirname(fileURLToPath(import.meta.url)), "../../..");
 
@@ -30,6 +34,7 @@ const envSchema = z.object({
   MAIL_CATCHER_URL: z.url().optional(),
   WEB_DIST: z.string().optional(),
   TRUST_PROXY: z.enum(["0", "1"]).default("0"),
+  UPLOADS_DIR: z.string().min(1).optional(),
 });
 
 export function readConfig(env: NodeJS.ProcessEnv = process.env) {
@@ -47,6 +52,7 @@ export function readConfig(env: NodeJS.ProcessEnv = process.env) {
     mailCatcherUrl: e.MAIL_CATCHER_URL,
     webDist: e.WEB_DIST ?? path.join(repoRoot, "apps/web/dist"),
     trustProxy: e.TRUST_PROXY === "1",
+    uploadsDir: e.UPLOADS_DIR ? path.resolve(e.UPLOADS_DIR) : defaultUploadsDir(),
   };
   return { config, databaseUrl: e.DATABASE_URL, port: e.PORT, host: e.HOST };
 }

@@ -1,4 +1,6 @@
 // Database tasks for the scripts: migrate, seed [--if-empty], reset.
+import path from "node:path";
+import { fileURLToPath } from "node:url";
 import { createDb } from "./client.ts";
 import { migrateDatabase } from "./migrate.ts";
 import { isSeeded, seedDemo } from "./seed/demo.ts";
@@ -14,7 +16,9 @@ async function seed(ifEmpty: boolean) {
       if (ifEmpty) return console.log("[db] demo data already present: nothing seeded");
       throw new Error("the database already holds a studio; use db:reset to start over");
     }
-    await seedDemo(db);
+    // The same place the API keeps uploads (UPLOADS_DIR, or .data/uploads at the repository root).
+    const repoRoot = path.resolve(path.dirname(fileURLToPath(import.meta.url)), "../../..");
+    await seedDemo(db, { uploadsDir: process.env.UPLOADS_DIR ? path.resolve(process.env.UPLOADS_DIR) : path.join(repoRoot, ".data/uploads") });
     console.log("[db] seeded the demo studio (Wrenfield Sound)");
   } finally {
     await pool.end();

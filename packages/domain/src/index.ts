@@ -56,3 +56,5 @@ export * from "./contracts/payroll.ts";
 export * from "./contracts/calendar-feeds.ts";
 export { addDays as addCalendarDays, workdayOf, workdayStart, workweekContaining, type Workweek } from "./payroll/studio-calendar.ts";
 export * from "./shared/date-window.ts";
+export * from "./tape/index.ts";
+export * from "./contracts/tape.ts";

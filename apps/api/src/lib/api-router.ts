@@ -109,7 +109,7 @@ const maxDepth = 32;
  * JSON may carry "\ud800", half of a UTF-16 pair: not text, and MariaDB's utf8mb4 cannot store it
  * (the driver would quietly write U+FFFD). One check for every route, before any schema runs.
  */
-function refuseUnpairedSurrogates(...inputs: unknown[]) {
+export function refuseUnpairedSurrogates(...inputs: unknown[]) {
   const details: ErrorDetail[] = [];
   const visit = (value: unknown, path: string[]) => {
     if (details.length >= 20) return;

@@ -1,6 +1,9 @@
 // Test harness for API tests: a throw-away MariaDB database per test file (migrated and seeded
 // with the demo studio), the real app through supertest, and an in-process SMTP catcher.
 import { randomBytes } from "node:crypto";
+import { mkdtemp, rm } from "node:fs/promises";
+import os from "node:os";
+import path from "node:path";
 import mysql from "mysql2/promise";
 import request from "supertest";
 import { createDb } from "@takeup/db";
@@ -31,7 +34,8 @@ export async function createTestApp(options: { throttlePolicy?: Partial<Throttle
   url.pathname = `/${name}`;
   await migrateDatabase(url.toString());
   const { db, pool } = createDb(url.toString(), { connectionLimit: 60 });
-  if (options.seed !== false) await seedDemo(db);
+  const uploadsDir = await mkdtemp(path.join(os.tmpdir(), "takeup-uploads-"));
+  if (options.seed !== false) await seedDemo(db, { uploadsDir });
 
   const catcher = await startMailCatcher({ smtpPort: 0, httpPort: 0 });
   const config: AppConfig = {
@@ -41,6 +45,7 @@ export async function createTestApp(options: { throttlePolicy?: Partial<Throttle
     mailFrom: "studio@takeup.test",
     mailCatcherUrl: `http://127.0.0.1:${catcher.httpPort}`,
     trustProxy: false,
+    uploadsDir,
   };
   const mailer = createMailer(db, config.smtpUrl, config.mailFrom, async () => "Wrenfield Sound");
   const app = createApp({ db, config, mailer, throttlePolicy: options.throttlePolicy });
@@ -64,6 +69,7 @@ export async function createTestApp(options: { throttlePolicy?: Partial<Throttle
     await catcher.close();
     await pool.query(`DROP DATABASE \`${name}\``);
     await pool.end();
+    await rm(config.uploadsDir!, { recursive: true, force: true });
   }
 
   return { app, db, pool, config, mailer, catcher, client, signIn, mailTo, close, databaseName: name };

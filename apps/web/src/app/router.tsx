@@ -18,6 +18,8 @@ import { DevMailRoute } from "./routes/dev/mail.tsx";
 import { HomeRoute } from "./routes/home/home.tsx";
 import { NotFoundRoute } from "./routes/not-found.tsx";
 import { RoomsRoute } from "./routes/rooms/rooms.tsx";
+import { TapePlannerRoute } from "./routes/tape/tape-planner.tsx";
+import { TapeStockRoute } from "./routes/tape/tape-stock.tsx";
 import { RouteError } from "./routes/route-error.tsx";
 import { MySessionsRoute } from "./routes/sessions/my-sessions.tsx";
 import { SessionsRoute } from "./routes/sessions/sessions.tsx";
@@ -56,6 +58,8 @@ export const routes: RouteObject[] = [
           guarded(paths.calendar.path, areaRoles.calendar, <CalendarRoute />),
           guarded(paths.bookings.path, areaRoles.bookings, <BookingsRoute />),
           guarded(paths.rooms.path, areaRoles.rooms, <RoomsRoute />),
+          guarded(paths.tapeStock.path, areaRoles.tapeStock, <TapeStockRoute />),
+          guarded(paths.tapePlanner.path, areaRoles.tapePlanner, <TapePlannerRoute />),
           guarded(paths.mySessions.path, areaRoles.mySessions, <MySessionsRoute />),
           guarded(paths.sessions.path, areaRoles.sessions, <SessionsRoute />),
           guarded(paths.clock.path, areaRoles.clock, <ClockPage />),

@@ -7,6 +7,8 @@ export const areaRoles = {
   calendar: ["owner", "manager", "bookkeeper"],
   bookings: ["owner", "manager", "bookkeeper"],
   rooms: ["owner", "manager", "bookkeeper"],
+  tapeStock: ["owner", "manager", "bookkeeper"],
+  tapePlanner: ["owner", "manager", "engineer", "bookkeeper"],
   mySessions: ["engineer"],
   sessions: ["client"],
   team: ["owner"],
@@ -22,6 +24,9 @@ export const areaRoles = {
   payRates: ["owner", "bookkeeper"],
   payrollSettings: ["owner", "manager", "bookkeeper"],
 } as const satisfies Record<string, readonly Role[]>;
+
+/** Receiving, selling and counting tape is the manager's (and the owner's) work. */
+export const canMoveTapeStock = (role: Role) => role === "owner" || role === "manager";
 
 const clientEditors: readonly Role[] = ["owner", "manager"];
 

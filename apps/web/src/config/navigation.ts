@@ -9,6 +9,8 @@ const clients: NavItem = { label: "Clients", href: paths.clients.list.getHref() 
 const calendar: NavItem = { label: "Calendar", href: paths.calendar.getHref() };
 const bookings: NavItem = { label: "Bookings", href: paths.bookings.getHref() };
 const rooms: NavItem = { label: "Rooms and rates", href: paths.rooms.getHref() };
+const tapeStock: NavItem = { label: "Tape stock", href: paths.tapeStock.getHref() };
+const tapePlanner: NavItem = { label: "Tape planner", href: paths.tapePlanner.getHref() };
 const myTimesheet: NavItem = { label: "My timesheet", href: paths.myTimesheet.getHref() };
 const payPeriods: NavItem = { label: "Pay periods", href: paths.payPeriods.list.getHref() };
 const payRates: NavItem = { label: "Pay rates", href: paths.payRates.getHref() };
@@ -27,6 +29,7 @@ export const navigationByRole: Record<Role, NavItem[]> = {
     bookings,
     clients,
     rooms,
+    tapeStock,
     ...inGroup(timeAndPay, clock, myTimesheet, corrections, payPeriods, payRates, payrollSettings),
     ...inGroup(
       "Studio",
@@ -42,11 +45,12 @@ export const navigationByRole: Record<Role, NavItem[]> = {
     bookings,
     clients,
     rooms,
+    tapeStock,
     ...inGroup(timeAndPay, clock, myTimesheet, corrections, payPeriods, payrollSettings),
   ],
   // The engineer's home is the clock, so "Time clock" is not listed twice.
-  engineer: [home("My day"), { label: "My sessions", href: paths.mySessions.getHref() }, myTimesheet],
-  bookkeeper: [home("Overview"), payPeriods, payRates, payrollSettings, bookings, clients],
+  engineer: [home("My day"), { label: "My sessions", href: paths.mySessions.getHref() }, myTimesheet, tapePlanner],
+  bookkeeper: [home("Overview"), payPeriods, payRates, payrollSettings, bookings, clients, tapeStock],
   client: [home("Our account"), { label: "Sessions", href: paths.sessions.getHref() }],
 };
 

@@ -30,6 +30,8 @@ export const paths = {
   },
   bookings: { path: "/bookings", getHref: () => "/bookings" },
   rooms: { path: "/rooms", getHref: () => "/rooms" },
+  tapeStock: { path: "/tape", getHref: () => "/tape" },
+  tapePlanner: { path: "/tape/planner", getHref: () => "/tape/planner" },
   mySessions: { path: "/my-sessions", getHref: () => "/my-sessions" },
   sessions: { path: "/sessions", getHref: () => "/sessions" },
   team: { path: "/team", getHref: () => "/team" },

@@ -5,6 +5,7 @@ import type { ClientKind, StaffRole } from "@takeup/domain";
 import type { Db, Tx } from "../client.ts";
 import { seedStudioFloor } from "./demo-studio-floor.ts";
 import { seedTime } from "./demo-time.ts";
+import { seedTape } from "./demo-tape.ts";
 import { account, clientAccounts, clientContacts, clientUsers, staffProfiles, studio, user } from "../schema/index.ts";
 
 export const demoPassword = "studio-demo-2026";
@@ -102,7 +103,7 @@ export async function isSeeded(db: Db): Promise<boolean> {
   return rows.length > 0;
 }
 
-export async function seedDemo(db: Db): Promise<void> {
+export async function seedDemo(db: Db, options: { uploadsDir?: string } = {}): Promise<void> {
   const passwordHash = await hashPassword(demoPassword);
   await db.transaction(async (tx) => {
     await tx.insert(studio).values(demoStudio);
@@ -134,5 +135,6 @@ export async function seedDemo(db: Db): Promise<void> {
     }
     await seedStudioFloor(tx);
     await seedTime(tx);
+    await seedTape(tx, new Date(), options.uploadsDir);
   });
 }
