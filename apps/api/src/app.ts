@@ -31,6 +31,7 @@ import { bookingRequestsRouter, bookingsRouter, quotesRouter } from "./routes/bo
 import { calendarFeedsRouter, feedsRouter } from "./routes/calendar-feeds/calendar-feeds.router.ts";
 import { timeClockRouter, timeEditsRouter, timeEntriesRouter } from "./routes/time-clock/time-clock.router.ts";
 import { payPeriodsRouter, payRatesRouter, payrollSettingsRouter } from "./routes/payroll/payroll.router.ts";
+import { billableRouter, depositInvoicesRouter, invoiceSettingsRouter, invoicesRouter, receivablesRouter } from "./routes/invoices/invoices.router.ts";
 
 export type AppDeps = { db: Db; config: AppConfig; mailer: Mailer; throttlePolicy?: Partial<ThrottlePolicy> };
 
@@ -61,6 +62,11 @@ export function apiRouters(deps: Deps) {
     payrollSettingsRouter(deps),
     payRatesRouter(deps),
     auditRouter(deps),
+    invoicesRouter(deps),
+    billableRouter(deps),
+    depositInvoicesRouter(deps),
+    receivablesRouter(deps),
+    invoiceSettingsRouter(deps),
     devMailRouter(deps),
   ];
 }
