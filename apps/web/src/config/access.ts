@@ -21,6 +21,9 @@ export const areaRoles = {
   payPeriods: ["owner", "manager", "bookkeeper"],
   payRates: ["owner", "bookkeeper"],
   payrollSettings: ["owner", "manager", "bookkeeper"],
+  invoices: ["owner", "manager", "bookkeeper", "client"],
+  billable: ["owner", "manager", "bookkeeper"],
+  receivables: ["owner", "manager", "bookkeeper"],
 } as const satisfies Record<string, readonly Role[]>;
 
 const clientEditors: readonly Role[] = ["owner", "manager"];

@@ -13,6 +13,10 @@ const myTimesheet: NavItem = { label: "My timesheet", href: paths.myTimesheet.ge
 const payPeriods: NavItem = { label: "Pay periods", href: paths.payPeriods.list.getHref() };
 const payRates: NavItem = { label: "Pay rates", href: paths.payRates.getHref() };
 const payrollSettings: NavItem = { label: "Payroll settings", href: paths.payrollSettings.getHref() };
+const money: NavItem[] = [
+  { label: "Invoices", href: paths.invoices.list.getHref(), group: "Money" },
+  { label: "A/R ageing", href: paths.receivables.getHref(), group: "Money" },
+];
 
 const timeAndPay = "Time and pay";
 const inGroup = (group: string, ...items: NavItem[]): NavItem[] => items.map((item) => ({ ...item, group }));
@@ -27,6 +31,7 @@ export const navigationByRole: Record<Role, NavItem[]> = {
     bookings,
     clients,
     rooms,
+    ...money,
     ...inGroup(timeAndPay, clock, myTimesheet, corrections, payPeriods, payRates, payrollSettings),
     ...inGroup(
       "Studio",
@@ -42,12 +47,13 @@ export const navigationByRole: Record<Role, NavItem[]> = {
     bookings,
     clients,
     rooms,
+    ...money,
     ...inGroup(timeAndPay, clock, myTimesheet, corrections, payPeriods, payrollSettings),
   ],
   // The engineer's home is the clock, so "Time clock" is not listed twice.
   engineer: [home("My day"), { label: "My sessions", href: paths.mySessions.getHref() }, myTimesheet],
-  bookkeeper: [home("Overview"), payPeriods, payRates, payrollSettings, bookings, clients],
-  client: [home("Our account"), { label: "Sessions", href: paths.sessions.getHref() }],
+  bookkeeper: [home("Overview"), payPeriods, payRates, payrollSettings, bookings, clients, ...money],
+  client: [home("Our account"), { label: "Sessions", href: paths.sessions.getHref() }, { label: "Invoices", href: paths.invoices.list.getHref() }],
 };
 
 export const navigationFor = (role: Role): NavItem[] => navigationByRole[role];
