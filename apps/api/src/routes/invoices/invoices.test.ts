@@ -1,3 +1,4 @@
+import fc from "fast-check";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { and, eq, isNull } from "drizzle-orm";
 import { bookings, documentCounters, invoices } from "@takeup/db";
@@ -64,13 +65,13 @@ describe("billing a wrapped session", () => {
     const made = answers.find((a) => a.status === 201)!.body;
     expect(made.status).toBe("draft");
     expect(made.totalCents).toBe(item.amountCents);
-    expect((await t.db.select().from(invoices).where(eq(invoices.clientAccountId, client))).length).toBe(1);
+    expect((await t.db.select().from(invoices).where(and(eq(invoices.clientAccountId, client), eq(invoices.status, "draft")))).length).toBe(1);
     expect((await manager.get(`/api/clients/${client}/billable`)).body).toEqual([]);
   });
 
   it("makes the session billable again when its draft is voided", async () => {
     const client = ids.client("Copper Vale");
-    const [row] = await t.db.select().from(invoices).where(eq(invoices.clientAccountId, client));
+    const [row] = await t.db.select().from(invoices).where(and(eq(invoices.clientAccountId, client), eq(invoices.status, "draft")));
     expect((await manager.post(`/api/invoices/${row!.id}/void`).send({ reason: "Wrong client" })).status).toBe(200);
     expect((await manager.get(`/api/clients/${client}/billable`)).body).toHaveLength(1);
   });
@@ -183,7 +184,8 @@ describe("payments and credit notes", () => {
     const courier = issued.lines.find((l: { description: string }) => l.description === "Courier");
     const byLine = await manager.post(`/api/invoices/${d.id}/credit-notes`).send({ reason: "Courier not used", lineIds: [courier.id] });
     expect(byLine.status).toBe(201);
-    expect(byLine.body.creditNotes[0].number).toMatch(/^CR-\d{4}-\d{4}$/);
+    expect(byLine.body.creditNotes[0].number).toMatch(/^[A-Z0-9]+-\d{4}-\d{4}$/);
+    expect(byLine.body.creditNotes[0].number.split("-")[0]).not.toBe(issued.number.split("-")[0]);
     expect(byLine.body.balanceCents).toBe(40_000);
     const whole = await manager.post(`/api/invoices/${d.id}/credit-notes`).send({ reason: "Session cancelled" });
     expect(whole.body.balanceCents).toBe(0);
@@ -276,4 +278,38 @@ describe("ageing and reminders", () => {
     const detail = (await manager.get(`/api/invoices/${d.id}`)).body;
     expect(detail.emails.map((e: { step: string }) => e.step)).toEqual(["issued", "reminder:7"]);
   });
+});
+
+describe("malformed payloads", () => {
+  it("never answer 5xx on the invoice routes that write", async () => {
+    const d = await draft(manager, ids.client("Lantern Static"));
+    const junk = fc.oneof(
+      fc.constant(null),
+      fc.boolean(),
+      fc.integer({ min: -(2 ** 53), max: 2 ** 53 }),
+      fc.double(),
+      fc.string({ maxLength: 80 }),
+      fc.constantFrom("2026-02-30", "9999-99-99", "\ud800", "1e309", "-0", "NaN", ""),
+      fc.array(fc.anything({ maxDepth: 1 }), { maxLength: 3 }),
+      fc.dictionary(fc.string({ maxLength: 8 }), fc.anything({ maxDepth: 1 }), { maxKeys: 3 }),
+    );
+    const body = (fields: string[]) => fc.dictionary(fc.constantFrom(...fields), junk, { maxKeys: fields.length });
+    const routes: [string, "post" | "patch", fc.Arbitrary<Record<string, unknown>>][] = [
+      ["/api/invoices", "post", body(["clientAccountId", "sources", "manualLines", "invoiceDiscount", "notes"])],
+      [`/api/invoices/${d.id}`, "patch", body(["manualLines", "removeLineIds", "lineDiscounts", "invoiceDiscount", "notes"])],
+      [`/api/invoices/${d.id}/payments`, "post", body(["method", "amountCents", "receivedOn", "reference", "overpaymentToCredit"])],
+      [`/api/invoices/${d.id}/credit-notes`, "post", body(["reason", "lineIds"])],
+      [`/api/invoices/${d.id}/void`, "post", body(["reason"])],
+      ["/api/invoice-settings", "patch", body(["invoicePrefix", "termsDays", "taxRates", "taxCalculation", "reminderDays"])],
+    ];
+    for (const [path, method, arb] of routes) {
+      await fc.assert(
+        fc.asyncProperty(arb, async (payload) => {
+          const res = await owner[method](path).send(payload);
+          expect(res.status, `${method} ${path} ${JSON.stringify(payload)}`).toBeLessThan(500);
+        }),
+        { numRuns: 25, seed: 20261202 },
+      );
+    }
+  }, 120_000);
 });
