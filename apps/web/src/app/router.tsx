@@ -16,6 +16,7 @@ import { ClientRoute } from "./routes/clients/client.tsx";
 import { ClientsRoute } from "./routes/clients/clients.tsx";
 import { BillableRoute } from "./routes/invoices/billable.tsx";
 import { InvoiceRoute } from "./routes/invoices/invoice.tsx";
+import { InvoiceSettingsRoute } from "./routes/invoices/invoice-settings.tsx";
 import { InvoicesRoute } from "./routes/invoices/invoices.tsx";
 import { ReceivablesRoute } from "./routes/invoices/receivables.tsx";
 import { DevMailRoute } from "./routes/dev/mail.tsx";
@@ -79,6 +80,7 @@ export const routes: RouteObject[] = [
           guarded(paths.invoices.detail.path, areaRoles.invoices, <InvoiceRoute />),
           guarded(paths.invoices.billable.path, areaRoles.billable, <BillableRoute />),
           guarded(paths.receivables.path, areaRoles.receivables, <ReceivablesRoute />),
+          guarded(paths.invoiceSettings.path, areaRoles.invoiceSettings, <InvoiceSettingsRoute />),
           { path: "*", element: <NotFoundRoute /> },
         ],
       },

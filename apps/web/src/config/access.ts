@@ -24,6 +24,7 @@ export const areaRoles = {
   invoices: ["owner", "manager", "bookkeeper", "client"],
   billable: ["owner", "manager", "bookkeeper"],
   receivables: ["owner", "manager", "bookkeeper"],
+  invoiceSettings: ["owner", "manager", "bookkeeper"],
 } as const satisfies Record<string, readonly Role[]>;
 
 const clientEditors: readonly Role[] = ["owner", "manager"];

@@ -59,6 +59,7 @@ export const paths = {
     detail: { path: "/invoices/:invoiceId", getHref: (id: number) => `/invoices/${id}` },
     billable: { path: "/clients/:clientId/billable", getHref: (clientId: number) => `/clients/${clientId}/billable` },
   },
+  invoiceSettings: { path: "/invoice-settings", getHref: () => "/invoice-settings" },
   receivables: { path: "/receivables", getHref: (asOf?: string) => (asOf ? `/receivables?asOf=${asOf}` : "/receivables") },
 } as const;
 

@@ -1,4 +1,7 @@
 import { useState } from "react";
+import { Link } from "react-router";
+import { buttonStyles } from "../../../components/ui/button.tsx";
+import { paths } from "../../../config/paths.ts";
 import { invoiceStatuses, invoiceStatusLabels } from "@takeup/domain";
 import { PageHeader } from "../../../components/ui/page-header.tsx";
 import { Input } from "../../../components/ui/input.tsx";
@@ -22,6 +25,13 @@ export function InvoicesRoute() {
       <PageHeader
         title="Invoices"
         description={staff ? "Drafts, issued invoices and what is still owed. Start a new invoice from a client's billable items." : "Your invoices and what is still owed."}
+        actions={
+          staff ? (
+            <Link to={paths.invoiceSettings.getHref()} className={buttonStyles("secondary")}>
+              Invoicing settings
+            </Link>
+          ) : null
+        }
       />
       <div className="mb-4 flex flex-wrap items-end gap-3">
         <label className="flex flex-col gap-1 text-sm font-semibold">
