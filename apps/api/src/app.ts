@@ -32,6 +32,7 @@ import { calendarFeedsRouter, feedsRouter } from "./routes/calendar-feeds/calend
 import { timeClockRouter, timeEditsRouter, timeEntriesRouter } from "./routes/time-clock/time-clock.router.ts";
 import { payPeriodsRouter, payRatesRouter, payrollSettingsRouter } from "./routes/payroll/payroll.router.ts";
 import { tapeRouter } from "./routes/tape/tape.router.ts";
+import { billableRouter, depositInvoicesRouter, invoiceSettingsRouter, invoicesRouter, receivablesRouter } from "./routes/invoices/invoices.router.ts";
 
 export type AppDeps = { db: Db; config: AppConfig; mailer: Mailer; throttlePolicy?: Partial<ThrottlePolicy> };
 
@@ -63,6 +64,11 @@ export function apiRouters(deps: Deps) {
     payRatesRouter(deps),
     tapeRouter(deps),
     auditRouter(deps),
+    invoicesRouter(deps),
+    billableRouter(deps),
+    depositInvoicesRouter(deps),
+    receivablesRouter(deps),
+    invoiceSettingsRouter(deps),
     devMailRouter(deps),
   ];
 }

@@ -58,3 +58,5 @@ export { addDays as addCalendarDays, workdayOf, workdayStart, workweekContaining
 export * from "./shared/date-window.ts";
 export * from "./tape/index.ts";
 export * from "./contracts/tape.ts";
+export * from "./invoicing/index.ts";
+export * from "./contracts/invoices.ts";

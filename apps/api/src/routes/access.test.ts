@@ -31,6 +31,8 @@ let otherClientId: number;
 let someStaffUserId: string;
 /** Bookings: Lantern Static's (the demo client's), and a wrapped one the demo engineer worked on. */
 let ids: { clientBooking: number; otherClientBooking: number; engineerBooking: number; otherEngineerBooking: number; otherFeed: number };
+/** Issued invoices: the demo client's own and another client's. */
+let invoiceIds: { own: number; other: number };
 
 beforeAll(async () => {
   t = await createTestApp();
@@ -57,6 +59,13 @@ beforeAll(async () => {
   const [sam] = await t.db.select().from(staffProfiles).where(eq(staffProfiles.displayName, "Sam Reyes"));
   const [feed] = await t.db.insert(calendarFeedTokens).values({ staffUserId: sam!.userId, tokenHash: "f".repeat(64) }).$returningId();
   ids.otherFeed = feed!.id;
+  const manager = agents.get("manager")!;
+  const issued = async (clientAccountId: number) => {
+    const draft = await manager.post("/api/invoices").send({ clientAccountId, sources: [], manualLines: [{ description: "Check", category: "other", quantity: 1, unitPriceCents: 100 }] });
+    await manager.post(`/api/invoices/${draft.body.id}/issue`);
+    return draft.body.id as number;
+  };
+  invoiceIds = { own: await issued(ownClientId), other: await issued(otherClientId) };
 });
 afterAll(() => t.close());
 
@@ -65,6 +74,8 @@ function concretePath(template: string, column: Column, other = false) {
   let id: number;
   if (template.startsWith("/api/bookings/")) {
     id = column === "client" ? (other ? ids.otherClientBooking : ids.clientBooking) : other ? ids.otherEngineerBooking : ids.engineerBooking;
+  } else if (template.startsWith("/api/invoices/")) {
+    id = other ? invoiceIds.other : invoiceIds.own;
   } else if (template.startsWith("/api/calendar-feeds/")) {
     id = ids.otherFeed;
   } else {
@@ -73,6 +84,7 @@ function concretePath(template: string, column: Column, other = false) {
   return template
     .replace("{id}", String(id))
     .replace("{userId}", someStaffUserId)
+    .replace("{paymentId}", "1")
     .replace("{token}", "x".repeat(43));
 }
 

@@ -14,6 +14,11 @@ import { ResetPasswordRoute } from "./routes/auth/reset-password.tsx";
 import { SignInRoute } from "./routes/auth/sign-in.tsx";
 import { ClientRoute } from "./routes/clients/client.tsx";
 import { ClientsRoute } from "./routes/clients/clients.tsx";
+import { BillableRoute } from "./routes/invoices/billable.tsx";
+import { InvoiceRoute } from "./routes/invoices/invoice.tsx";
+import { InvoiceSettingsRoute } from "./routes/invoices/invoice-settings.tsx";
+import { InvoicesRoute } from "./routes/invoices/invoices.tsx";
+import { ReceivablesRoute } from "./routes/invoices/receivables.tsx";
 import { DevMailRoute } from "./routes/dev/mail.tsx";
 import { HomeRoute } from "./routes/home/home.tsx";
 import { NotFoundRoute } from "./routes/not-found.tsx";
@@ -75,6 +80,11 @@ export const routes: RouteObject[] = [
           guarded(paths.profile.path, areaRoles.profile, <ProfileRoute />),
           guarded(paths.activity.path, areaRoles.activity, <ActivityRoute />),
           guarded(paths.devMail.path, areaRoles.devMail, <DevMailRoute />),
+          guarded(paths.invoices.list.path, areaRoles.invoices, <InvoicesRoute />),
+          guarded(paths.invoices.detail.path, areaRoles.invoices, <InvoiceRoute />),
+          guarded(paths.invoices.billable.path, areaRoles.billable, <BillableRoute />),
+          guarded(paths.receivables.path, areaRoles.receivables, <ReceivablesRoute />),
+          guarded(paths.invoiceSettings.path, areaRoles.invoiceSettings, <InvoiceSettingsRoute />),
           { path: "*", element: <NotFoundRoute /> },
         ],
       },

@@ -23,6 +23,10 @@ export const areaRoles = {
   payPeriods: ["owner", "manager", "bookkeeper"],
   payRates: ["owner", "bookkeeper"],
   payrollSettings: ["owner", "manager", "bookkeeper"],
+  invoices: ["owner", "manager", "bookkeeper", "client"],
+  billable: ["owner", "manager", "bookkeeper"],
+  receivables: ["owner", "manager", "bookkeeper"],
+  invoiceSettings: ["owner", "manager", "bookkeeper"],
 } as const satisfies Record<string, readonly Role[]>;
 
 /** Receiving, selling and counting tape is the manager's (and the owner's) work. */

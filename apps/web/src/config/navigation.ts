@@ -15,6 +15,10 @@ const myTimesheet: NavItem = { label: "My timesheet", href: paths.myTimesheet.ge
 const payPeriods: NavItem = { label: "Pay periods", href: paths.payPeriods.list.getHref() };
 const payRates: NavItem = { label: "Pay rates", href: paths.payRates.getHref() };
 const payrollSettings: NavItem = { label: "Payroll settings", href: paths.payrollSettings.getHref() };
+const money: NavItem[] = [
+  { label: "Invoices", href: paths.invoices.list.getHref(), group: "Money" },
+  { label: "A/R ageing", href: paths.receivables.getHref(), group: "Money" },
+];
 
 const timeAndPay = "Time and pay";
 const inGroup = (group: string, ...items: NavItem[]): NavItem[] => items.map((item) => ({ ...item, group }));
@@ -30,6 +34,7 @@ export const navigationByRole: Record<Role, NavItem[]> = {
     clients,
     rooms,
     tapeStock,
+    ...money,
     ...inGroup(timeAndPay, clock, myTimesheet, corrections, payPeriods, payRates, payrollSettings),
     ...inGroup(
       "Studio",
@@ -46,12 +51,13 @@ export const navigationByRole: Record<Role, NavItem[]> = {
     clients,
     rooms,
     tapeStock,
+    ...money,
     ...inGroup(timeAndPay, clock, myTimesheet, corrections, payPeriods, payrollSettings),
   ],
   // The engineer's home is the clock, so "Time clock" is not listed twice.
   engineer: [home("My day"), { label: "My sessions", href: paths.mySessions.getHref() }, myTimesheet, tapePlanner],
-  bookkeeper: [home("Overview"), payPeriods, payRates, payrollSettings, bookings, clients, tapeStock],
-  client: [home("Our account"), { label: "Sessions", href: paths.sessions.getHref() }],
+  bookkeeper: [home("Overview"), payPeriods, payRates, payrollSettings, bookings, clients, tapeStock, ...money],
+  client: [home("Our account"), { label: "Sessions", href: paths.sessions.getHref() }, { label: "Invoices", href: paths.invoices.list.getHref() }],
 };
 
 export const navigationFor = (role: Role): NavItem[] => navigationByRole[role];

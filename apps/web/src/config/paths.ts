@@ -56,6 +56,13 @@ export const paths = {
   },
   payRates: { path: "/pay-rates", getHref: () => "/pay-rates" },
   payrollSettings: { path: "/payroll-settings", getHref: () => "/payroll-settings" },
+  invoices: {
+    list: { path: "/invoices", getHref: () => "/invoices" },
+    detail: { path: "/invoices/:invoiceId", getHref: (id: number) => `/invoices/${id}` },
+    billable: { path: "/clients/:clientId/billable", getHref: (clientId: number) => `/clients/${clientId}/billable` },
+  },
+  invoiceSettings: { path: "/invoice-settings", getHref: () => "/invoice-settings" },
+  receivables: { path: "/receivables", getHref: (asOf?: string) => (asOf ? `/receivables?asOf=${asOf}` : "/receivables") },
 } as const;
 
 /**

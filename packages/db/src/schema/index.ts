@@ -7,3 +7,4 @@ export * from "./bookings.ts";
 export * from "./time.ts";
 export * from "./throttle.ts";
 export * from "./tape.ts";
+export * from "./invoices.ts";

@@ -6,6 +6,7 @@ import type { Db, Tx } from "../client.ts";
 import { seedStudioFloor } from "./demo-studio-floor.ts";
 import { seedTime } from "./demo-time.ts";
 import { seedTape } from "./demo-tape.ts";
+import { seedInvoices } from "./demo-invoices.ts";
 import { account, clientAccounts, clientContacts, clientUsers, staffProfiles, studio, user } from "../schema/index.ts";
 
 export const demoPassword = "studio-demo-2026";
@@ -136,5 +137,6 @@ export async function seedDemo(db: Db, options: { uploadsDir?: string } = {}): P
     await seedStudioFloor(tx);
     await seedTime(tx);
     await seedTape(tx, new Date(), options.uploadsDir);
+    await seedInvoices(tx);
   });
 }

@@ -22,6 +22,8 @@ describe("SideNav", () => {
       "Bookings",
       "Clients",
       "Rooms and rates",
+      "Invoices",
+      "A/R ageing",
       "Time clock",
       "My timesheet",
       "Corrections",
@@ -43,6 +45,8 @@ describe("SideNav", () => {
       "Bookings",
       "Clients",
       "Rooms and rates",
+      "Invoices",
+      "A/R ageing",
       "Time clock",
       "My timesheet",
       "Corrections",
@@ -57,15 +61,15 @@ describe("SideNav", () => {
     expect(labels(renderNav("engineer"))).toEqual(["My day", "My sessions", "My timesheet"]);
   });
 
-  it("shows a client only its own account and sessions, and no Team or Clients", () => {
+  it("shows a client only its own account, sessions and invoices, and no Team or Clients", () => {
     const nav = renderNav("client");
-    expect(labels(nav)).toEqual(["Our account", "Sessions"]);
+    expect(labels(nav)).toEqual(["Our account", "Sessions", "Invoices"]);
     expect(nav.queryByRole("link", { name: "Team" })).not.toBeInTheDocument();
     expect(nav.queryByRole("link", { name: "Clients" })).not.toBeInTheDocument();
   });
 
-  it("gives the bookkeeper the pay periods first, then the bookings and the clients list", () => {
-    expect(labels(renderNav("bookkeeper"))).toEqual(["Overview", "Pay periods", "Pay rates", "Payroll settings", "Bookings", "Clients"]);
+  it("gives the bookkeeper the pay periods first, then the bookings, the clients list and the money", () => {
+    expect(labels(renderNav("bookkeeper"))).toEqual(["Overview", "Pay periods", "Pay rates", "Payroll settings", "Bookings", "Clients", "Invoices", "A/R ageing"]);
   });
 
   it("marks the page you are on, and not home as well", () => {

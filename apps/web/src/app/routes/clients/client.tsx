@@ -1,7 +1,7 @@
 import { useState } from "react";
 import { Link, useParams } from "react-router";
 import type { ClientDetailDto } from "@takeup/domain";
-import { Button } from "../../../components/ui/button.tsx";
+import { Button, buttonStyles } from "../../../components/ui/button.tsx";
 import { PageHeader } from "../../../components/ui/page-header.tsx";
 import { ErrorState, LoadingState } from "../../../components/ui/states.tsx";
 import { canEditClients } from "../../../config/access.ts";
@@ -51,6 +51,7 @@ function ClientView({ client }: { client: ClientDetailDto }) {
         actions={
           canEdit ? (
             <>
+              <Link to={paths.invoices.billable.getHref(client.id)} className={buttonStyles("secondary")}>Billable items</Link>
               <Button variant="secondary" onClick={() => setDialog("invite")}>
                 Invite a client user
               </Button>

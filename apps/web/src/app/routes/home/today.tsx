@@ -8,6 +8,7 @@ import { useClients } from "../../../features/clients/api/get-clients.ts";
 import { useStaff } from "../../../features/staff/api/get-staff.ts";
 import { useStudio } from "../../../features/studio/api/get-studio.ts";
 import { StudioDay } from "./studio-day.tsx";
+import { MoneyOwedCard } from "../../../features/invoices/components/money-owed-card.tsx";
 
 const plural = (n: number, one: string, many: string) => `${n} ${n === 1 ? one : many}`;
 
@@ -39,6 +40,7 @@ export function TodayPage({ me }: { me: MeDto }) {
         <LoadingState />
       ) : (
         <div className="grid gap-4 sm:grid-cols-2 lg:grid-cols-3">
+          <MoneyOwedCard />
           <StatCard
             label="Clients"
             value={clients.data?.length ?? 0}

@@ -1,0 +1,8 @@
+import type { BillableSourceKind } from "@takeup/domain";
+import { bookingSource } from "./booking.ts";
+import type { BillableSource } from "./types.ts";
+
+/** Every kind of billable thing the studio can invoice, one provider each. */
+export const billableSources: Partial<Record<BillableSourceKind, BillableSource>> = {
+  booking: bookingSource,
+};
