@@ -50,3 +50,4 @@ export * from "./payroll/settings-catalogue.ts";
 export * from "./contracts/time.ts";
 export { addDays as addCalendarDays, workdayOf, workdayStart, workweekContaining, type Workweek } from "./payroll/studio-calendar.ts";
 export * from "./shared/date-window.ts";
+export * from "./vault/index.ts";
