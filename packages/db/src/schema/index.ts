@@ -6,3 +6,4 @@ export * from "./rooms.ts";
 export * from "./bookings.ts";
 export * from "./time.ts";
 export * from "./throttle.ts";
+export * from "./vault.ts";
