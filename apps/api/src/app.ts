@@ -31,6 +31,7 @@ import { bookingRequestsRouter, bookingsRouter, quotesRouter } from "./routes/bo
 import { calendarFeedsRouter, feedsRouter } from "./routes/calendar-feeds/calendar-feeds.router.ts";
 import { timeClockRouter, timeEditsRouter, timeEntriesRouter } from "./routes/time-clock/time-clock.router.ts";
 import { payPeriodsRouter, payRatesRouter, payrollSettingsRouter } from "./routes/payroll/payroll.router.ts";
+import { recordersRouter, reelsRouter, vaultSettingsRouter } from "./routes/vault/vault.router.ts";
 
 export type AppDeps = { db: Db; config: AppConfig; mailer: Mailer; throttlePolicy?: Partial<ThrottlePolicy> };
 
@@ -60,6 +61,9 @@ export function apiRouters(deps: Deps) {
     payPeriodsRouter(deps),
     payrollSettingsRouter(deps),
     payRatesRouter(deps),
+    reelsRouter(deps),
+    recordersRouter(deps),
+    vaultSettingsRouter(deps),
     auditRouter(deps),
     devMailRouter(deps),
   ];

@@ -51,3 +51,4 @@ export * from "./contracts/time.ts";
 export { addDays as addCalendarDays, workdayOf, workdayStart, workweekContaining, type Workweek } from "./payroll/studio-calendar.ts";
 export * from "./shared/date-window.ts";
 export * from "./vault/index.ts";
+export * from "./contracts/vault.ts";

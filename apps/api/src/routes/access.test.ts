@@ -4,7 +4,7 @@ import path from "node:path";
 import { fileURLToPath } from "node:url";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { eq } from "drizzle-orm";
-import { bookings, calendarFeedTokens, clientAccounts, staffProfiles } from "@takeup/db";
+import { bookings, calendarFeedTokens, clientAccounts, projects, reels, staffProfiles } from "@takeup/db";
 import { createTestApp, type TestApp } from "../test/harness.ts";
 import { demo } from "../test/demo.ts";
 
@@ -31,6 +31,8 @@ let otherClientId: number;
 let someStaffUserId: string;
 /** Bookings: Lantern Static's (the demo client's), and a wrapped one the demo engineer worked on. */
 let ids: { clientBooking: number; otherClientBooking: number; engineerBooking: number; otherEngineerBooking: number; otherFeed: number };
+/** Reels: one of Lantern Static's lockout (the demo engineer is on it), and one of Blue Hour's mixes (she is not). */
+let reelIds: { own: number; other: number };
 
 beforeAll(async () => {
   t = await createTestApp();
@@ -57,6 +59,11 @@ beforeAll(async () => {
   const [sam] = await t.db.select().from(staffProfiles).where(eq(staffProfiles.displayName, "Sam Reyes"));
   const [feed] = await t.db.insert(calendarFeedTokens).values({ staffUserId: sam!.userId, tokenHash: "f".repeat(64) }).$returningId();
   ids.otherFeed = feed!.id;
+  const projectReel = async (name: string) => {
+    const [row] = await t.db.select({ id: reels.id }).from(reels).innerJoin(projects, eq(projects.id, reels.projectId)).where(eq(projects.name, name)).limit(1);
+    return row!.id;
+  };
+  reelIds = { own: await projectReel("Harbour Lights"), other: await projectReel("Night Ferries") };
 });
 afterAll(() => t.close());
 
@@ -65,6 +72,8 @@ function concretePath(template: string, column: Column, other = false) {
   let id: number;
   if (template.startsWith("/api/bookings/")) {
     id = column === "client" ? (other ? ids.otherClientBooking : ids.clientBooking) : other ? ids.otherEngineerBooking : ids.engineerBooking;
+  } else if (template.startsWith("/api/reels/")) {
+    id = other ? reelIds.other : reelIds.own;
   } else if (template.startsWith("/api/calendar-feeds/")) {
     id = ids.otherFeed;
   } else {

@@ -5,6 +5,7 @@ import type { ClientKind, StaffRole } from "@takeup/domain";
 import type { Db, Tx } from "../client.ts";
 import { seedStudioFloor } from "./demo-studio-floor.ts";
 import { seedTime } from "./demo-time.ts";
+import { seedVault } from "./demo-vault.ts";
 import { account, clientAccounts, clientContacts, clientUsers, staffProfiles, studio, user } from "../schema/index.ts";
 
 export const demoPassword = "studio-demo-2026";
@@ -134,5 +135,6 @@ export async function seedDemo(db: Db): Promise<void> {
     }
     await seedStudioFloor(tx);
     await seedTime(tx);
+    await seedVault(tx);
   });
 }
