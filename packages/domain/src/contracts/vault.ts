@@ -199,7 +199,8 @@ export const reelRoutes = {
     summary: "Fill in the track sheet; tracks and songs, when sent, replace the lists (engineers: reels of their own sessions)",
     access: staff,
     params: idParams,
-    body: trackSheetInput,
+    // An empty PATCH changes nothing (and still answers 404 for a reel that is not the caller's).
+    body: trackSheetInput.default({}),
     response: reelDetailDto,
   }),
   checkOut: defineRoute({ method: "post", path: "/api/reels/:id/check-out", summary: "A reel leaves the vault for a while", access: staff, params: idParams, body: checkOutInput, response: reelDetailDto }),
