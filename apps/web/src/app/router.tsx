@@ -14,6 +14,8 @@ import { ResetPasswordRoute } from "./routes/auth/reset-password.tsx";
 import { SignInRoute } from "./routes/auth/sign-in.tsx";
 import { ClientRoute } from "./routes/clients/client.tsx";
 import { ClientsRoute } from "./routes/clients/clients.tsx";
+import { ReelRoute } from "./routes/vault/reel.tsx";
+import { VaultRoute } from "./routes/vault/vault.tsx";
 import { DevMailRoute } from "./routes/dev/mail.tsx";
 import { HomeRoute } from "./routes/home/home.tsx";
 import { NotFoundRoute } from "./routes/not-found.tsx";
@@ -56,6 +58,8 @@ export const routes: RouteObject[] = [
           guarded(paths.calendar.path, areaRoles.calendar, <CalendarRoute />),
           guarded(paths.bookings.path, areaRoles.bookings, <BookingsRoute />),
           guarded(paths.rooms.path, areaRoles.rooms, <RoomsRoute />),
+          guarded(paths.vault.list.path, areaRoles.vault, <VaultRoute />),
+          guarded(paths.vault.reel.path, areaRoles.vault, <ReelRoute />),
           guarded(paths.mySessions.path, areaRoles.mySessions, <MySessionsRoute />),
           guarded(paths.sessions.path, areaRoles.sessions, <SessionsRoute />),
           guarded(paths.clock.path, areaRoles.clock, <ClockPage />),

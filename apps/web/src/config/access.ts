@@ -7,6 +7,7 @@ export const areaRoles = {
   calendar: ["owner", "manager", "bookkeeper"],
   bookings: ["owner", "manager", "bookkeeper"],
   rooms: ["owner", "manager", "bookkeeper"],
+  vault: ["owner", "manager", "engineer", "bookkeeper", "client"],
   mySessions: ["engineer"],
   sessions: ["client"],
   team: ["owner"],

@@ -9,6 +9,7 @@ const clients: NavItem = { label: "Clients", href: paths.clients.list.getHref() 
 const calendar: NavItem = { label: "Calendar", href: paths.calendar.getHref() };
 const bookings: NavItem = { label: "Bookings", href: paths.bookings.getHref() };
 const rooms: NavItem = { label: "Rooms and rates", href: paths.rooms.getHref() };
+const vault: NavItem = { label: "Vault", href: paths.vault.list.getHref() };
 const myTimesheet: NavItem = { label: "My timesheet", href: paths.myTimesheet.getHref() };
 const payPeriods: NavItem = { label: "Pay periods", href: paths.payPeriods.list.getHref() };
 const payRates: NavItem = { label: "Pay rates", href: paths.payRates.getHref() };
@@ -27,6 +28,7 @@ export const navigationByRole: Record<Role, NavItem[]> = {
     bookings,
     clients,
     rooms,
+    vault,
     ...inGroup(timeAndPay, clock, myTimesheet, corrections, payPeriods, payRates, payrollSettings),
     ...inGroup(
       "Studio",
@@ -42,12 +44,13 @@ export const navigationByRole: Record<Role, NavItem[]> = {
     bookings,
     clients,
     rooms,
+    vault,
     ...inGroup(timeAndPay, clock, myTimesheet, corrections, payPeriods, payrollSettings),
   ],
   // The engineer's home is the clock, so "Time clock" is not listed twice.
-  engineer: [home("My day"), { label: "My sessions", href: paths.mySessions.getHref() }, myTimesheet],
-  bookkeeper: [home("Overview"), payPeriods, payRates, payrollSettings, bookings, clients],
-  client: [home("Our account"), { label: "Sessions", href: paths.sessions.getHref() }],
+  engineer: [home("My day"), { label: "My sessions", href: paths.mySessions.getHref() }, myTimesheet, vault],
+  bookkeeper: [home("Overview"), payPeriods, payRates, payrollSettings, bookings, clients, vault],
+  client: [home("Our account"), { label: "Sessions", href: paths.sessions.getHref() }, { label: "Your reels", href: paths.vault.list.getHref() }],
 };
 
 export const navigationFor = (role: Role): NavItem[] => navigationByRole[role];
