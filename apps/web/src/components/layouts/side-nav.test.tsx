@@ -22,6 +22,7 @@ describe("SideNav", () => {
       "Bookings",
       "Clients",
       "Rooms and rates",
+      "Vault",
       "Time clock",
       "My timesheet",
       "Corrections",
@@ -43,6 +44,7 @@ describe("SideNav", () => {
       "Bookings",
       "Clients",
       "Rooms and rates",
+      "Vault",
       "Time clock",
       "My timesheet",
       "Corrections",
@@ -54,18 +56,18 @@ describe("SideNav", () => {
   });
 
   it("gives an engineer their day, their sessions and their timesheet, and nothing about clients or money", () => {
-    expect(labels(renderNav("engineer"))).toEqual(["My day", "My sessions", "My timesheet"]);
+    expect(labels(renderNav("engineer"))).toEqual(["My day", "My sessions", "My timesheet", "Vault"]);
   });
 
   it("shows a client only its own account and sessions, and no Team or Clients", () => {
     const nav = renderNav("client");
-    expect(labels(nav)).toEqual(["Our account", "Sessions"]);
+    expect(labels(nav)).toEqual(["Our account", "Sessions", "Your reels"]);
     expect(nav.queryByRole("link", { name: "Team" })).not.toBeInTheDocument();
     expect(nav.queryByRole("link", { name: "Clients" })).not.toBeInTheDocument();
   });
 
   it("gives the bookkeeper the pay periods first, then the bookings and the clients list", () => {
-    expect(labels(renderNav("bookkeeper"))).toEqual(["Overview", "Pay periods", "Pay rates", "Payroll settings", "Bookings", "Clients"]);
+    expect(labels(renderNav("bookkeeper"))).toEqual(["Overview", "Pay periods", "Pay rates", "Payroll settings", "Bookings", "Clients", "Vault"]);
   });
 
   it("marks the page you are on, and not home as well", () => {
