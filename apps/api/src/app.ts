@@ -33,6 +33,7 @@ import { timeClockRouter, timeEditsRouter, timeEntriesRouter } from "./routes/ti
 import { payPeriodsRouter, payRatesRouter, payrollSettingsRouter } from "./routes/payroll/payroll.router.ts";
 import { tapeRouter } from "./routes/tape/tape.router.ts";
 import { billableRouter, depositInvoicesRouter, invoiceSettingsRouter, invoicesRouter, receivablesRouter } from "./routes/invoices/invoices.router.ts";
+import { recordersRouter, reelsRouter, vaultSettingsRouter } from "./routes/vault/vault.router.ts";
 
 export type AppDeps = { db: Db; config: AppConfig; mailer: Mailer; throttlePolicy?: Partial<ThrottlePolicy> };
 
@@ -63,6 +64,9 @@ export function apiRouters(deps: Deps) {
     payrollSettingsRouter(deps),
     payRatesRouter(deps),
     tapeRouter(deps),
+    reelsRouter(deps),
+    recordersRouter(deps),
+    vaultSettingsRouter(deps),
     auditRouter(deps),
     invoicesRouter(deps),
     billableRouter(deps),

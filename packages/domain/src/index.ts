@@ -60,3 +60,5 @@ export * from "./tape/index.ts";
 export * from "./contracts/tape.ts";
 export * from "./invoicing/index.ts";
 export * from "./contracts/invoices.ts";
+export * from "./vault/index.ts";
+export * from "./contracts/vault.ts";

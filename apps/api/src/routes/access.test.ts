@@ -4,7 +4,7 @@ import path from "node:path";
 import { fileURLToPath } from "node:url";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { eq } from "drizzle-orm";
-import { bookings, calendarFeedTokens, clientAccounts, staffProfiles } from "@takeup/db";
+import { bookings, calendarFeedTokens, clientAccounts, projects, reels, staffProfiles } from "@takeup/db";
 import { createTestApp, type TestApp } from "../test/harness.ts";
 import { demo } from "../test/demo.ts";
 
@@ -33,6 +33,8 @@ let someStaffUserId: string;
 let ids: { clientBooking: number; otherClientBooking: number; engineerBooking: number; otherEngineerBooking: number; otherFeed: number };
 /** Issued invoices: the demo client's own and another client's. */
 let invoiceIds: { own: number; other: number };
+/** Reels: one of Lantern Static's lockout (the demo engineer is on it), and one of Blue Hour's mixes (she is not). */
+let reelIds: { own: number; other: number };
 
 beforeAll(async () => {
   t = await createTestApp();
@@ -66,6 +68,11 @@ beforeAll(async () => {
     return draft.body.id as number;
   };
   invoiceIds = { own: await issued(ownClientId), other: await issued(otherClientId) };
+  const projectReel = async (name: string) => {
+    const [row] = await t.db.select({ id: reels.id }).from(reels).innerJoin(projects, eq(projects.id, reels.projectId)).where(eq(projects.name, name)).limit(1);
+    return row!.id;
+  };
+  reelIds = { own: await projectReel("Harbour Lights"), other: await projectReel("Night Ferries") };
 });
 afterAll(() => t.close());
 
@@ -76,6 +83,8 @@ function concretePath(template: string, column: Column, other = false) {
     id = column === "client" ? (other ? ids.otherClientBooking : ids.clientBooking) : other ? ids.otherEngineerBooking : ids.engineerBooking;
   } else if (template.startsWith("/api/invoices/")) {
     id = other ? invoiceIds.other : invoiceIds.own;
+  } else if (template.startsWith("/api/reels/")) {
+    id = other ? reelIds.other : reelIds.own;
   } else if (template.startsWith("/api/calendar-feeds/")) {
     id = ids.otherFeed;
   } else {

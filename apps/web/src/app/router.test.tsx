@@ -29,7 +29,7 @@ describe("the app's routes", () => {
 
     expect(await screen.findByRole("heading", { name: "Lantern Static", level: 1 })).toBeInTheDocument();
     const nav = within(screen.getByRole("navigation", { name: "Main" }));
-    expect(nav.getAllByRole("link").map((l) => l.textContent)).toEqual(["Our account", "Sessions", "Invoices"]);
+    expect(nav.getAllByRole("link").map((l) => l.textContent)).toEqual(["Our account", "Sessions", "Invoices", "Your reels"]);
     expect(screen.getByRole("heading", { name: "People with sign-ins" })).toBeInTheDocument();
   });
 

@@ -19,6 +19,8 @@ import { InvoiceRoute } from "./routes/invoices/invoice.tsx";
 import { InvoiceSettingsRoute } from "./routes/invoices/invoice-settings.tsx";
 import { InvoicesRoute } from "./routes/invoices/invoices.tsx";
 import { ReceivablesRoute } from "./routes/invoices/receivables.tsx";
+import { ReelRoute } from "./routes/vault/reel.tsx";
+import { VaultRoute } from "./routes/vault/vault.tsx";
 import { DevMailRoute } from "./routes/dev/mail.tsx";
 import { HomeRoute } from "./routes/home/home.tsx";
 import { NotFoundRoute } from "./routes/not-found.tsx";
@@ -65,6 +67,8 @@ export const routes: RouteObject[] = [
           guarded(paths.rooms.path, areaRoles.rooms, <RoomsRoute />),
           guarded(paths.tapeStock.path, areaRoles.tapeStock, <TapeStockRoute />),
           guarded(paths.tapePlanner.path, areaRoles.tapePlanner, <TapePlannerRoute />),
+          guarded(paths.vault.list.path, areaRoles.vault, <VaultRoute />),
+          guarded(paths.vault.reel.path, areaRoles.vault, <ReelRoute />),
           guarded(paths.mySessions.path, areaRoles.mySessions, <MySessionsRoute />),
           guarded(paths.sessions.path, areaRoles.sessions, <SessionsRoute />),
           guarded(paths.clock.path, areaRoles.clock, <ClockPage />),

@@ -9,6 +9,7 @@ export const areaRoles = {
   rooms: ["owner", "manager", "bookkeeper"],
   tapeStock: ["owner", "manager", "bookkeeper"],
   tapePlanner: ["owner", "manager", "engineer", "bookkeeper"],
+  vault: ["owner", "manager", "engineer", "bookkeeper", "client"],
   mySessions: ["engineer"],
   sessions: ["client"],
   team: ["owner"],

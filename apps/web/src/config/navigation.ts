@@ -11,6 +11,7 @@ const bookings: NavItem = { label: "Bookings", href: paths.bookings.getHref() };
 const rooms: NavItem = { label: "Rooms and rates", href: paths.rooms.getHref() };
 const tapeStock: NavItem = { label: "Tape stock", href: paths.tapeStock.getHref() };
 const tapePlanner: NavItem = { label: "Tape planner", href: paths.tapePlanner.getHref() };
+const vault: NavItem = { label: "Vault", href: paths.vault.list.getHref() };
 const myTimesheet: NavItem = { label: "My timesheet", href: paths.myTimesheet.getHref() };
 const payPeriods: NavItem = { label: "Pay periods", href: paths.payPeriods.list.getHref() };
 const payRates: NavItem = { label: "Pay rates", href: paths.payRates.getHref() };
@@ -34,6 +35,7 @@ export const navigationByRole: Record<Role, NavItem[]> = {
     clients,
     rooms,
     tapeStock,
+    vault,
     ...money,
     ...inGroup(timeAndPay, clock, myTimesheet, corrections, payPeriods, payRates, payrollSettings),
     ...inGroup(
@@ -51,13 +53,14 @@ export const navigationByRole: Record<Role, NavItem[]> = {
     clients,
     rooms,
     tapeStock,
+    vault,
     ...money,
     ...inGroup(timeAndPay, clock, myTimesheet, corrections, payPeriods, payrollSettings),
   ],
   // The engineer's home is the clock, so "Time clock" is not listed twice.
-  engineer: [home("My day"), { label: "My sessions", href: paths.mySessions.getHref() }, myTimesheet, tapePlanner],
-  bookkeeper: [home("Overview"), payPeriods, payRates, payrollSettings, bookings, clients, tapeStock, ...money],
-  client: [home("Our account"), { label: "Sessions", href: paths.sessions.getHref() }, { label: "Invoices", href: paths.invoices.list.getHref() }],
+  engineer: [home("My day"), { label: "My sessions", href: paths.mySessions.getHref() }, myTimesheet, tapePlanner, vault],
+  bookkeeper: [home("Overview"), payPeriods, payRates, payrollSettings, bookings, clients, tapeStock, vault, ...money],
+  client: [home("Our account"), { label: "Sessions", href: paths.sessions.getHref() }, { label: "Invoices", href: paths.invoices.list.getHref() }, { label: "Your reels", href: paths.vault.list.getHref() }],
 };
 
 export const navigationFor = (role: Role): NavItem[] => navigationByRole[role];

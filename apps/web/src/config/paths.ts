@@ -29,6 +29,10 @@ export const paths = {
     },
   },
   bookings: { path: "/bookings", getHref: () => "/bookings" },
+  vault: {
+    list: { path: "/vault", getHref: () => "/vault" },
+    reel: { path: "/vault/reels/:reelId", getHref: (id: number) => `/vault/reels/${id}` },
+  },
   rooms: { path: "/rooms", getHref: () => "/rooms" },
   tapeStock: { path: "/tape", getHref: () => "/tape" },
   tapePlanner: { path: "/tape/planner", getHref: () => "/tape/planner" },

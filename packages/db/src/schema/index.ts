@@ -8,3 +8,4 @@ export * from "./time.ts";
 export * from "./throttle.ts";
 export * from "./tape.ts";
 export * from "./invoices.ts";
+export * from "./vault.ts";

@@ -34,6 +34,12 @@ export const studio = mysqlTable("studio", {
   roundRegularRateToCent: boolean("round_regular_rate_to_cent").notNull().default(false),
   /** An entry still open after this many hours is flagged for review (never closed silently). */
   openEntryLimitHours: int("open_entry_limit_hours").notNull().default(16),
+  /** Vault: days a reel is kept free after its project's last session, then a fee per reel per month. */
+  storageFreeDays: int("storage_free_days").notNull().default(90),
+  storageMonthlyFeeCents: int("storage_monthly_fee_cents").notNull().default(500),
+  /** Recorder care intervals in running hours [common practice; the owner's settings]. */
+  alignmentIntervalHours: int("alignment_interval_hours").notNull().default(100),
+  cleaningIntervalHours: int("cleaning_interval_hours").notNull().default(10),
   updatedAt: updatedAt(),
 });
 

@@ -7,6 +7,7 @@ import { seedStudioFloor } from "./demo-studio-floor.ts";
 import { seedTime } from "./demo-time.ts";
 import { seedTape } from "./demo-tape.ts";
 import { seedInvoices } from "./demo-invoices.ts";
+import { seedVault } from "./demo-vault.ts";
 import { account, clientAccounts, clientContacts, clientUsers, staffProfiles, studio, user } from "../schema/index.ts";
 
 export const demoPassword = "studio-demo-2026";
@@ -138,5 +139,6 @@ export async function seedDemo(db: Db, options: { uploadsDir?: string } = {}): P
     await seedTime(tx);
     await seedTape(tx, new Date(), options.uploadsDir);
     await seedInvoices(tx);
+    await seedVault(tx);
   });
 }

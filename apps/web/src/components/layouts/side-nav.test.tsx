@@ -22,6 +22,7 @@ describe("SideNav", () => {
       "Bookings",
       "Clients",
       "Rooms and rates",
+      "Vault",
       "Invoices",
       "A/R ageing",
       "Time clock",
@@ -45,6 +46,7 @@ describe("SideNav", () => {
       "Bookings",
       "Clients",
       "Rooms and rates",
+      "Vault",
       "Invoices",
       "A/R ageing",
       "Time clock",
@@ -58,18 +60,18 @@ describe("SideNav", () => {
   });
 
   it("gives an engineer their day, their sessions and their timesheet, and nothing about clients or money", () => {
-    expect(labels(renderNav("engineer"))).toEqual(["My day", "My sessions", "My timesheet"]);
+    expect(labels(renderNav("engineer"))).toEqual(["My day", "My sessions", "My timesheet", "Vault"]);
   });
 
   it("shows a client only its own account, sessions and invoices, and no Team or Clients", () => {
     const nav = renderNav("client");
-    expect(labels(nav)).toEqual(["Our account", "Sessions", "Invoices"]);
+    expect(labels(nav)).toEqual(["Our account", "Sessions", "Invoices", "Your reels"]);
     expect(nav.queryByRole("link", { name: "Team" })).not.toBeInTheDocument();
     expect(nav.queryByRole("link", { name: "Clients" })).not.toBeInTheDocument();
   });
 
-  it("gives the bookkeeper the pay periods first, then the bookings, the clients list and the money", () => {
-    expect(labels(renderNav("bookkeeper"))).toEqual(["Overview", "Pay periods", "Pay rates", "Payroll settings", "Bookings", "Clients", "Invoices", "A/R ageing"]);
+  it("gives the bookkeeper the pay periods first, then the bookings, the clients list, the vault and the money", () => {
+    expect(labels(renderNav("bookkeeper"))).toEqual(["Overview", "Pay periods", "Pay rates", "Payroll settings", "Bookings", "Clients", "Vault", "Invoices", "A/R ageing"]);
   });
 
   it("marks the page you are on, and not home as well", () => {

@@ -9,6 +9,7 @@ import { useStaff } from "../../../features/staff/api/get-staff.ts";
 import { useStudio } from "../../../features/studio/api/get-studio.ts";
 import { StudioDay } from "./studio-day.tsx";
 import { MoneyOwedCard } from "../../../features/invoices/components/money-owed-card.tsx";
+import { RecordersDueCard } from "../../../features/vault/components/recorders-due-card.tsx";
 
 const plural = (n: number, one: string, many: string) => `${n} ${n === 1 ? one : many}`;
 
@@ -33,6 +34,9 @@ export function TodayPage({ me }: { me: MeDto }) {
       <PageHeader title="Today" description={<StudioDay me={me} timeZone={studio.data.timeZone} />} />
       <div className="mb-6">
         <TodayBoard timeZone={studio.data.timeZone} calendarHref={paths.calendar.getHref()} />
+      </div>
+      <div className="mb-6">
+        <RecordersDueCard careHref={`${paths.rooms.getHref()}#recorder-care`} />
       </div>
       {failed ? (
         <ErrorState error={failed.error} onRetry={() => void failed.refetch()} />

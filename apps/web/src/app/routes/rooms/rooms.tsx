@@ -17,6 +17,8 @@ import { RoomFormDialog } from "../../../features/rooms/components/room-form-dia
 import { RoomsTable } from "../../../features/rooms/components/rooms-table.tsx";
 import { useStudio } from "../../../features/studio/api/get-studio.ts";
 import { useSignedInUser } from "../../use-signed-in-user.ts";
+import { RecorderCare } from "../../../features/vault/components/recorder-care.tsx";
+import { studioToday } from "../../../lib/studio-time.ts";
 
 type Editing =
   | { kind: "room"; room?: RoomDto }
@@ -111,6 +113,15 @@ export function RoomsRoute() {
           ) : (
             <EquipmentTable equipment={equipment.data} canEdit={owner} onEdit={onEditEquipment} />
           )}
+        </section>
+      ) : null}
+
+      {me.role === "owner" || me.role === "manager" ? (
+        <section id="recorder-care" aria-labelledby="recorder-care-heading" className="mt-10 flex flex-col gap-3">
+          <h2 id="recorder-care-heading" className="text-lg font-semibold">
+            Recorder care
+          </h2>
+          <RecorderCare today={studioToday(timeZone)} />
         </section>
       ) : null}
 
