@@ -15,7 +15,7 @@ const { db, pool } = createDb(databaseUrl, {
 const mailer = createMailer(db, config.smtpUrl, config.mailFrom, async () => (await loadStudio(db)).name);
 const app = createApp({ db, config, mailer });
 
-const stopScheduler = startScheduler(db, mailer, backgroundJobs);
+const stopScheduler = startScheduler({ db, mailer, appUrl: config.appUrl }, backgroundJobs);
 const server = app.listen(port, host, () => logger.info("takeup api listening", { host, port, appUrl: config.appUrl }));
 
 let closing = false;

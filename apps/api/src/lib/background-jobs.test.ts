@@ -55,7 +55,7 @@ describe("background work with two API processes on one database", () => {
     await book("Blue Hour Records", 20, 3, "confirmed");
     const now = new Date();
 
-    const [first, second] = await Promise.all([runDueJobs(t.db, t.mailer, backgroundJobs, "process-a", now), runDueJobs(other.db, other.mailer, backgroundJobs, "process-b", now)]);
+    const [first, second] = await Promise.all([runDueJobs({ db: t.db, mailer: t.mailer, appUrl: t.config.appUrl }, backgroundJobs, "process-a", now), runDueJobs({ db: other.db, mailer: other.mailer, appUrl: t.config.appUrl }, backgroundJobs, "process-b", now)]);
 
     // Each job ran in exactly one of the two processes.
     for (const job of backgroundJobs) expect([first, second].filter((handled) => job.name in handled).map(() => job.name)).toEqual([job.name]);
@@ -64,14 +64,14 @@ describe("background work with two API processes on one database", () => {
     // The process that delivered mail may have run before the other queued the reminders: the
     // next delivery turn (15 s on) sends them, in one process.
     const next = new Date(now.getTime() + 16_000);
-    const delivery = await Promise.all([runDueJobs(t.db, t.mailer, backgroundJobs, "process-a", next), runDueJobs(other.db, other.mailer, backgroundJobs, "process-b", next)]);
+    const delivery = await Promise.all([runDueJobs({ db: t.db, mailer: t.mailer, appUrl: t.config.appUrl }, backgroundJobs, "process-a", next), runDueJobs({ db: other.db, mailer: other.mailer, appUrl: t.config.appUrl }, backgroundJobs, "process-b", next)]);
     expect(delivery.flatMap((handled) => Object.keys(handled))).toEqual(["deliver-email"]);
     const reminders = messagesFor("Tomorrow: Room J");
     expect(reminders.filter((m) => m.to.includes("accounts@bluehour.test"))).toHaveLength(1);
     expect(new Set(reminders.map((m) => m.to.join()))).toHaveProperty("size", reminders.length);
 
     // Ticking again at that moment runs nothing: no job is due yet.
-    const again = await Promise.all([runDueJobs(t.db, t.mailer, backgroundJobs, "process-a", next), runDueJobs(other.db, other.mailer, backgroundJobs, "process-b", next)]);
+    const again = await Promise.all([runDueJobs({ db: t.db, mailer: t.mailer, appUrl: t.config.appUrl }, backgroundJobs, "process-a", next), runDueJobs({ db: other.db, mailer: other.mailer, appUrl: t.config.appUrl }, backgroundJobs, "process-b", next)]);
     expect(again).toEqual([{}, {}]);
   });
 

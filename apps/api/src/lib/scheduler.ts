@@ -5,7 +5,9 @@ import { scheduledJobs, type Db } from "@takeup/db";
 import type { Mailer } from "./mailer.ts";
 import { logger } from "./logger.ts";
 
-export type JobContext = { db: Db; mailer: Mailer; now: Date };
+/** What every job gets: the database, the mailer, the app's public address (for links) and the time. */
+export type JobServices = { db: Db; mailer: Mailer; appUrl: string };
+export type JobContext = JobServices & { now: Date };
 
 /** A piece of background work that lives with its capability; the scheduler only decides when. */
 export type BackgroundJob = {
@@ -30,12 +32,13 @@ export async function claimDueRun(db: Db, job: BackgroundJob, holder: string, no
 }
 
 /** Runs, in order, every job whose turn it is; a failing job is logged and the others still run. */
-export async function runDueJobs(db: Db, mailer: Mailer, jobs: readonly BackgroundJob[], holder: string, now = new Date()) {
+export async function runDueJobs(services: JobServices, jobs: readonly BackgroundJob[], holder: string, now = new Date()) {
+  const { db } = services;
   const handled: Record<string, number> = {};
   for (const job of jobs) {
     if (!(await claimDueRun(db, job, holder, now))) continue;
     try {
-      handled[job.name] = await job.run({ db, mailer, now });
+      handled[job.name] = await job.run({ ...services, now });
       await db.update(scheduledJobs).set({ lastFinishedAt: new Date(), lastResult: handled[job.name], lastError: null }).where(eq(scheduledJobs.name, job.name));
     } catch (error) {
       const reason = error instanceof Error ? error.message : String(error);
@@ -47,14 +50,14 @@ export async function runDueJobs(db: Db, mailer: Mailer, jobs: readonly Backgrou
 }
 
 /** Ticks every `tickMs` and runs the jobs that are due; returns a function that stops it. */
-export function startScheduler(db: Db, mailer: Mailer, jobs: readonly BackgroundJob[], tickMs = 15_000) {
+export function startScheduler(services: JobServices, jobs: readonly BackgroundJob[], tickMs = 15_000) {
   const holder = `${hostname()}:${process.pid}:${randomUUID().slice(0, 8)}`;
   let running = false;
   const tick = async () => {
     if (running) return;
     running = true;
     try {
-      await runDueJobs(db, mailer, jobs, holder);
+      await runDueJobs(services, jobs, holder);
     } catch (error) {
       logger.error("scheduled work failed", { reason: error instanceof Error ? error.message : String(error) });
     } finally {

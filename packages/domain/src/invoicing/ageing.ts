@@ -1,4 +1,4 @@
-import { product, roundHalfUpDiv } from "../pricing/money-math.ts";
+import { product, roundHalfUpDiv } from "../shared/money.ts";
 
 /**
  * Accounts-receivable ageing by days past due, as of any date. The buckets are our choice; the

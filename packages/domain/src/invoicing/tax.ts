@@ -1,4 +1,4 @@
-import { product, roundHalfUpDiv } from "../pricing/money-math.ts";
+import { product, roundHalfUpDiv } from "../shared/money.ts";
 import type { TaxCategory } from "./categories.ts";
 
 /**

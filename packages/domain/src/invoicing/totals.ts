@@ -1,4 +1,5 @@
-import { product, roundHalfUpDiv, roundRunningTotal } from "../pricing/money-math.ts";
+import { product, roundHalfUpDiv } from "../shared/money.ts";
+import { roundRunningTotal } from "../pricing/money-math.ts";
 import type { TaxCategory } from "./categories.ts";
 import { computeTax, type TaxCalculation, type TaxRates, type TaxRounding, type TaxSummaryRow } from "./tax.ts";
 

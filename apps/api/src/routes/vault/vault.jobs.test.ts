@@ -5,6 +5,7 @@ import { reelMovements, reels, storageCharges, storageNotices } from "@takeup/db
 import { createTestApp, type TestApp } from "../../test/harness.ts";
 import { demo } from "../../test/demo.ts";
 import { recordStorageCharges } from "./vault.jobs.ts";
+import { deliverQueuedEmails } from "../../lib/outbox.ts";
 
 let t: TestApp;
 beforeAll(async () => {
@@ -17,14 +18,14 @@ const now = new Date("2026-12-02T18:00:00Z");
 
 describe("the storage-fee job (free 90 days after the last session, then 5.00 a reel a month: the demo owner's settings)", () => {
   it("records each chargeable reel-month exactly once when two runs overlap, and nothing more on a third", async () => {
-    const [first, second] = await Promise.all([recordStorageCharges(t.db, t.mailer, now), recordStorageCharges(t.db, t.mailer, now)]);
+    const [first, second] = await Promise.all([recordStorageCharges(t.db, now), recordStorageCharges(t.db, now)]);
     const [counted] = await t.db.select({ rows: sql<number>`count(*)`, pairs: sql<number>`count(distinct reel_id, month)` }).from(storageCharges);
     const notices = (await t.db.select().from(storageNotices)).length;
     expect(Number(counted!.rows)).toBeGreaterThan(0);
     expect(Number(counted!.pairs)).toBe(Number(counted!.rows));
     // Between them the two runs claimed every row once: neither counted a row the other wrote.
     expect(first + second).toBe(Number(counted!.rows) + notices);
-    expect(await recordStorageCharges(t.db, t.mailer, now)).toBe(0);
+    expect(await recordStorageCharges(t.db, now)).toBe(0);
   });
 
   it("charges a reel recorded on 10 March 2025 without a project from 9 June 2025 to this month, 5.00 each", async () => {
@@ -54,8 +55,9 @@ describe("the storage-fee job (free 90 days after the last session, then 5.00 a 
     const made = await manager.post("/api/reels").send({ clientAccountId: orchard.id, trackCount: 24, tapeWidthMils: 2000, speedIps: 15, recordedOn: "2026-09-16" });
     expect(made.body.feesFrom).toBe("2026-12-16");
     const before = t.mailTo(demo.otherClient).length;
-    await Promise.all([recordStorageCharges(t.db, t.mailer, now), recordStorageCharges(t.db, t.mailer, now)]);
-    await recordStorageCharges(t.db, t.mailer, now);
+    await Promise.all([recordStorageCharges(t.db, now), recordStorageCharges(t.db, now)]);
+    await recordStorageCharges(t.db, now);
+    await deliverQueuedEmails(t.db, t.mailer);
     const notices = t.mailTo(demo.otherClient).slice(before);
     expect(notices).toHaveLength(1);
     expect(notices[0]!.subject).toContain("Storage fees start soon");

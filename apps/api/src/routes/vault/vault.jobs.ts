@@ -2,9 +2,8 @@ import { and, eq, inArray, isNotNull, max } from "drizzle-orm";
 import { DateTime } from "luxon";
 import { bookings, isDuplicateKeyError, reelMovements, reels, storageCharges, storageNotices, studio, type Db } from "@takeup/db";
 import { chargeableMonths, feeNoticeDate, feeStartDate } from "@takeup/domain";
-import type { Mailer } from "../../lib/mailer.ts";
+import { enqueueEmail } from "../../lib/outbox.ts";
 import { writeAudit } from "../../lib/audit.ts";
-import { logger } from "../../lib/logger.ts";
 import { loadStudio } from "../studio/studio.service.ts";
 import { clientRecipients } from "../bookings/recipients.ts";
 import { storageNoticeEmail } from "../../emails/storage-notice.ts";
@@ -34,10 +33,11 @@ async function reelFeeStarts(db: Db, freeDays: number, timeZone: string): Promis
  * The monthly storage-fee work (docs/tape.md, "Vault"): records each chargeable reel-month as a
  * `storage_charges` row for invoicing, and tells clients one month before a reel's fees start.
  * Safe when two runs overlap: each reel-month and each notice is claimed by a unique key in the
- * transaction that writes it (a duplicate means another run has it), and mail goes out after commit.
+ * transaction that writes it (a duplicate means another run has it), and the notice e-mail is
+ * queued in the claiming transaction.
  * Returns the number of charges recorded plus notices claimed by this run.
  */
-export async function recordStorageCharges(db: Db, mailer: Mailer, now = new Date()): Promise<number> {
+export async function recordStorageCharges(db: Db, now = new Date()): Promise<number> {
   const [settings] = await db.select({ timeZone: studio.timeZone, freeDays: studio.storageFreeDays, feeCents: studio.storageMonthlyFeeCents }).from(studio).where(eq(studio.id, 1));
   if (!settings) return 0;
   const asOf = DateTime.fromJSDate(now, { zone: settings.timeZone }).toISODate()!;
@@ -67,28 +67,27 @@ export async function recordStorageCharges(db: Db, mailer: Mailer, now = new Dat
     }
   }
 
+  // One notice per client for the reels whose fees start within a month, claimed per reel; the
+  // client's e-mail is queued in the same transaction (decision 017), keyed by the first reel.
   const toTell = new Map<number, ReelFees[]>();
   for (const reel of fees) {
     if (reel.releasedOn || noticed.has(reel.id) || !(feeNoticeDate(reel.feeStart) <= asOf && asOf < reel.feeStart)) continue;
-    const won = await claim(async (tx) => {
-      await tx.insert(storageNotices).values({ reelId: reel.id, clientAccountId: reel.clientAccountId, feeStart: reel.feeStart, createdAt: now });
-      await writeAudit(tx, null, "storage_notice.claimed", { type: "reel", id: reel.id }, { after: { feeStart: reel.feeStart } });
-    });
-    if (!won) continue;
-    done += 1;
     toTell.set(reel.clientAccountId, [...(toTell.get(reel.clientAccountId) ?? []), reel]);
   }
   if (toTell.size) {
     const studioDto = await loadStudio(db);
     for (const [clientAccountId, list] of toTell) {
-      for (const r of await clientRecipients(db, clientAccountId)) {
-        try {
-          await mailer.send(storageNoticeEmail({ studio: studioDto, to: r.email, name: r.name, reels: list, monthlyFeeCents: settings.feeCents }));
-        } catch (error) {
-          // The notice is claimed; the failed send is in the e-mail log for the manager to retry.
-          logger.warn("storage notice not sent", { clientAccountId, reason: String(error) });
+      const recipients = await clientRecipients(db, clientAccountId);
+      const won = await claim(async (tx) => {
+        for (const reel of list) {
+          await tx.insert(storageNotices).values({ reelId: reel.id, clientAccountId: reel.clientAccountId, feeStart: reel.feeStart, createdAt: now });
+          await writeAudit(tx, null, "storage_notice.claimed", { type: "reel", id: reel.id }, { after: { feeStart: reel.feeStart } });
         }
-      }
+        for (const r of recipients) {
+          await enqueueEmail(tx, `storage-notice:${list[0]!.id}:${r.email.toLowerCase()}`, storageNoticeEmail({ studio: studioDto, to: r.email, name: r.name, reels: list, monthlyFeeCents: settings.feeCents }), now);
+        }
+      });
+      if (won) done += list.length;
     }
   }
   return done;
