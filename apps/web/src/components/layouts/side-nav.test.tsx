@@ -22,6 +22,7 @@ describe("SideNav", () => {
       "Bookings",
       "Clients",
       "Rooms and rates",
+      "Tape stock",
       "Vault",
       "Invoices",
       "A/R ageing",
@@ -46,6 +47,7 @@ describe("SideNav", () => {
       "Bookings",
       "Clients",
       "Rooms and rates",
+      "Tape stock",
       "Vault",
       "Invoices",
       "A/R ageing",
@@ -59,8 +61,8 @@ describe("SideNav", () => {
     expect(nav.queryByRole("link", { name: "Team" })).not.toBeInTheDocument();
   });
 
-  it("gives an engineer their day, their sessions and their timesheet, and nothing about clients or money", () => {
-    expect(labels(renderNav("engineer"))).toEqual(["My day", "My sessions", "My timesheet", "Vault"]);
+  it("gives an engineer their day, their sessions and their timesheet, the tape planner and the vault, and nothing about clients or money", () => {
+    expect(labels(renderNav("engineer"))).toEqual(["My day", "My sessions", "My timesheet", "Tape planner", "Vault"]);
   });
 
   it("shows a client only its own account, sessions and invoices, and no Team or Clients", () => {
@@ -70,8 +72,8 @@ describe("SideNav", () => {
     expect(nav.queryByRole("link", { name: "Clients" })).not.toBeInTheDocument();
   });
 
-  it("gives the bookkeeper the pay periods first, then the bookings, the clients list, the vault and the money", () => {
-    expect(labels(renderNav("bookkeeper"))).toEqual(["Overview", "Pay periods", "Pay rates", "Payroll settings", "Bookings", "Clients", "Vault", "Invoices", "A/R ageing"]);
+  it("gives the bookkeeper the pay periods first, then the bookings, the clients list, tape, the vault and the money", () => {
+    expect(labels(renderNav("bookkeeper"))).toEqual(["Overview", "Pay periods", "Pay rates", "Payroll settings", "Bookings", "Clients", "Tape stock", "Vault", "Invoices", "A/R ageing"]);
   });
 
   it("marks the page you are on, and not home as well", () => {
